@@ -1,0 +1,2 @@
+/** JMH benchmarks of geotick, each beside a reference library in the same run. */
+package io.geotick.benchmarks;

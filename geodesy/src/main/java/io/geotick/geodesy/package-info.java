@@ -1,0 +1,2 @@
+/** geotick geodesy. */
+package io.geotick.geodesy;

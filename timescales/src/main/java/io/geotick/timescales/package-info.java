@@ -1,0 +1,2 @@
+/** geotick timescales. */
+package io.geotick.timescales;

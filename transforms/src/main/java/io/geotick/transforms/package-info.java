@@ -1,0 +1,2 @@
+/** geotick transforms. */
+package io.geotick.transforms;
