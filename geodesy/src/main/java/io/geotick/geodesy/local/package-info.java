@@ -1,0 +1,5 @@
+/**
+ * Local tangent frames about an origin: east-north-up (ENU), north-east-down (NED) and
+ * azimuth-elevation-range (AER); rotation of vectors and covariance matrices between ECEF and ENU.
+ */
+package io.geotick.geodesy.local;
