@@ -27,7 +27,7 @@ public enum SystemKind {
     NED("ned", true, new Axis("n", "north", METRE), new Axis("e", "east", METRE), new Axis("d", "down", METRE)),
     /** Azimuth (degrees clockwise from north), elevation (degrees), slant range (metres) from an origin. */
     AER("aer", true,
-        new Axis("az", "azimuth", DEGREE), new Axis("el", "elevation", DEGREE), new Axis("range", "range", METRE));
+        new Axis("az", "azimuth", DEGREE, true), new Axis("el", "elevation", DEGREE), new Axis("range", "range", METRE));
 
     private final String word;
     private final boolean needsOrigin;

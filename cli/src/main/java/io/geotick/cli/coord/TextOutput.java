@@ -29,7 +29,7 @@ public final class TextOutput {
         int intWidth = 0;
         List<String> numbers = new ArrayList<>();
         for (OutputField f : p.values()) {
-            String s = f.axis().unit().formatText(f.value());
+            String s = f.axis().formatText(f.value());
             numbers.add(s);
             intWidth = Math.max(intWidth, s.indexOf('.'));
             width = Math.max(width, f.axis().label().length());
