@@ -116,7 +116,7 @@ public final class GeoidGrid {
             int c = t.indexOf(':');
             if (c < 0) {
                 throw new GridFormatException(name + ", line " + ln + ": header line '" + t
-                    + "' is not of the form 'key : value'");
+                    + "' is not of the form 'key : value' (is the 'end_of_head' line missing?)");
             }
             String key = t.substring(0, c).strip().toLowerCase(Locale.ROOT);
             h.put(key, t.substring(c + 1).strip());
