@@ -15,14 +15,24 @@ final class Proj4jReference {
     private Proj4jReference() {
     }
 
-    /** A geographic CRS on a named Proj4J ellipsoid with 7 "to WGS 84" parameters (m, ″, ppm; PV). */
+    /**
+     * A geographic CRS with 7 "to WGS 84" parameters (m, ″, ppm; PV) on a named Proj4J ellipsoid, or on
+     * explicit axes when {@code ellipsoid} is written "a,b".
+     */
     static CoordinateReferenceSystem geographic(String ellipsoid, double... toWgs84) {
         StringBuilder p = new StringBuilder();
         for (double v : toWgs84) {
             p.append(p.length() == 0 ? "" : ",").append(v);
         }
-        return FACTORY.createFromParameters("reference", new String[] {"+proj=longlat", "+ellps=" + ellipsoid,
-            "+towgs84=" + p, "+no_defs"});
+        String[] axes = ellipsoid.split(",");
+        String[] ell = axes.length == 2 ? new String[] {"+a=" + axes[0], "+b=" + axes[1]}
+            : new String[] {"+ellps=" + ellipsoid};
+        String[] all = new String[ell.length + 3];
+        all[0] = "+proj=longlat";
+        System.arraycopy(ell, 0, all, 1, ell.length);
+        all[ell.length + 1] = "+towgs84=" + p;
+        all[ell.length + 2] = "+no_defs";
+        return FACTORY.createFromParameters("reference", all);
     }
 
     /** Proj4J's geocentric "to WGS 84" shift applied to one ECEF point (metres). */

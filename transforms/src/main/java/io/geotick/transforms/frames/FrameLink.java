@@ -263,6 +263,41 @@ public final class FrameLink {
         return new FrameStep(s, t, transform, d);
     }
 
+    /**
+     * The link as published, for registry listings: parameters at the reference epoch and their rates
+     * for a time-dependent set, the date range for an alignment; nothing is evaluated.
+     */
+    public StepDescription describe() {
+        List<Parameter> ps = new ArrayList<>();
+        String method;
+        OptionalInt epsgMethod;
+        switch (kind) {
+            case GEOCENTRIC_TRANSLATIONS:
+                method = "Geocentric translations";
+                epsgMethod = OptionalInt.of(9603);
+                addTranslations(ps, parameters);
+                break;
+            case HELMERT:
+                method = convention.methodName() + ", small-angle";
+                epsgMethod = OptionalInt.of(convention.epsgGeocentricMethod());
+                addSeven(ps, parameters, "");
+                break;
+            case TIME_DEPENDENT_HELMERT:
+                method = "Time-dependent " + timeDependent.convention().methodName();
+                epsgMethod = OptionalInt.of(timeDependent.epsgMethod());
+                ps.add(new Parameter("reference epoch", timeDependent.referenceEpoch().decimalYear(), "year"));
+                addSeven(ps, timeDependent.parametersAtReference(), "");
+                addSeven(ps, timeDependent.rates(), " rate");
+                break;
+            default:
+                method = "Identity by alignment (" + validity() + ")";
+                epsgMethod = OptionalInt.empty();
+                break;
+        }
+        return new StepDescription(from + " → " + to, method, epsgMethod, epsgTransformation, ps, source, accuracy,
+            cautions);
+    }
+
     private static void addTranslations(List<Parameter> ps, HelmertParameters p) {
         ps.add(new Parameter("tx", p.tx(), "m"));
         ps.add(new Parameter("ty", p.ty(), "m"));
