@@ -31,8 +31,11 @@ final class GeoidStep {
             + grid.header().getOrDefault("ref ellipsoid", "not stated");
         StepDescription d = new StepDescription(
             toOrthometric ? "ellipsoidal → orthometric height (H = h − N)" : "orthometric → ellipsoidal height (h = H + N)",
-            "Geoid undulation, " + interpolation.name().toLowerCase(java.util.Locale.ROOT) + " interpolation",
-            OptionalInt.empty(), OptionalInt.empty(), List.of(new Parameter("model", 0, grid.modelName())),
+            "Geoid undulation from " + grid.modelName() + ", "
+                + interpolation.name().toLowerCase(java.util.Locale.ROOT) + " interpolation",
+            OptionalInt.empty(), OptionalInt.empty(), List.of(
+                new Parameter("latitude spacing", grid.latitudeSpacing(), "degree"),
+                new Parameter("longitude spacing", grid.longitudeSpacing(), "degree")),
             "ISG grid " + grid.name() + " (model frame: " + ref + ")", 0,
             List.of("accuracy is that of the geoid model (not stated in ISG files); the model's own frame and"
                 + " ellipsoid should match the chain's frame: a mismatch of frames shifts N by up to the datum"

@@ -259,6 +259,36 @@ public final class GeoidGrid {
         return name;
     }
 
+    /** Node spacing in latitude, degrees. */
+    public double latitudeSpacing() {
+        return dLat;
+    }
+
+    /** Node spacing in longitude, degrees. */
+    public double longitudeSpacing() {
+        return dLon;
+    }
+
+    /** Southern edge (first node row), degrees. */
+    public double southLatitude() {
+        return latMin;
+    }
+
+    /** Northern edge, degrees. */
+    public double northLatitude() {
+        return latMax;
+    }
+
+    /** Western edge, degrees. */
+    public double westLongitude() {
+        return lonMin;
+    }
+
+    /** Eastern edge, degrees. */
+    public double eastLongitude() {
+        return lonMax;
+    }
+
     /** The model name from the header, or the file name. */
     public String modelName() {
         return header.getOrDefault("model name", name);

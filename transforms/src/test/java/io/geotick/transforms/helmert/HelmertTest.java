@@ -71,6 +71,37 @@ class HelmertTest {
     }
 
     @Test
+    void rigorousSingleAxisRotationIsTheTextbookFrameRotation() {
+        // Source: coordinate-frame rotation of the axes by θ about Z (IOGP GN 7-2, §4.3.3: axes rotate,
+        // points stay): x' = x cos θ + y sin θ, y' = −x sin θ + y cos θ; position vector turns the point
+        // the other way.
+        double arcsec = 3600 * 30; // 30°: large enough that the small-angle form is visibly wrong
+        double t = Math.toRadians(30);
+        Helmert cf = Helmert.of(HelmertParameters.of(0, 0, 0, 0, 0, arcsec, 0), RotationConvention.COORDINATE_FRAME,
+            RotationForm.RIGOROUS);
+        EcefPosition q = cf.apply(P);
+        assertThat(q.x()).isCloseTo(P.x() * Math.cos(t) + P.y() * Math.sin(t), within(1e-8));
+        assertThat(q.y()).isCloseTo(-P.x() * Math.sin(t) + P.y() * Math.cos(t), within(1e-8));
+        assertThat(q.z()).isCloseTo(P.z(), within(1e-8));
+        EcefPosition pv = cf.inConvention(RotationConvention.POSITION_VECTOR).apply(P);
+        assertThat(pv.distanceTo(q)).isLessThan(1e-8);
+        EcefPosition back = Helmert.of(HelmertParameters.of(0, 0, 0, 0, 0, arcsec, 0),
+            RotationConvention.POSITION_VECTOR, RotationForm.RIGOROUS).apply(q);
+        assertThat(back.distanceTo(P)).isLessThan(1e-8);
+    }
+
+    @Test
+    void timeDependentSignReversalIsFirstOrder() {
+        TimeDependentHelmert t = TimeDependentHelmert.of(HelmertParameters.ofMillimetres(-84.68, -19.42, 32.01,
+            -0.4254, 2.2578, 2.4015, 9.710), HelmertParameters.ofMillimetres(1.42, 1.34, 0.90, 1.5461, 1.1820,
+            1.1551, 0.109), io.geotick.transforms.Epoch.of(1994.0), RotationConvention.COORDINATE_FRAME);
+        io.geotick.transforms.Epoch e = io.geotick.transforms.Epoch.of(2013.9);
+        EcefPosition g = t.apply(P, e);
+        double d = t.reversedBySignReversal().apply(g, e).distanceTo(t.at(e).inverse().apply(g));
+        assertThat(d).isBetween(1e-10, 1e-6);
+    }
+
+    @Test
     void arrayVariantMatchesSinglePointsAndWorksInPlace() {
         Helmert h = Helmert.coordinateFrame(LARGE);
         double[] buf = {P.x(), P.y(), P.z(), 1e6, 2e6, 3e6};
