@@ -76,12 +76,8 @@ public class DatumShiftBenchmark {
             projEcef[i] = new ProjCoordinate(e.x(), e.y(), e.z());
         }
         CRSFactory f = new CRSFactory();
-        StringBuilder p = new StringBuilder();
-        for (double v : OSGB) {
-            p.append(p.length() == 0 ? "" : ",").append(v);
-        }
-        CoordinateReferenceSystem osgb = f.createFromParameters("osgb", new String[] {"+proj=longlat",
-            "+a=6377563.396", "+b=6356256.909", "+towgs84=" + p, "+no_defs"});
+        // Proj4J's bundled EPSG definition of OSGB 1936 carries the same EPSG 1314 parameters.
+        CoordinateReferenceSystem osgb = f.createFromName("EPSG:4277");
         projDatum = osgb.getDatum();
         projOsgbToWgs84 = new BasicCoordinateTransform(osgb, f.createFromName("EPSG:4326"));
         osgbToWgs84 = ConversionChain.builder().from(CoordinateSystem.geodetic(StandardFrames.OSGB36))

@@ -204,7 +204,8 @@ class HelmertReferenceTest {
     @Test
     void sevenParameterSetsAgreeWithProj4j() {
         // Source: Proj4J 1.4.1 (reference library): "to WGS 84" shifts, position vector, small-angle.
-        // Parameter sets (from memory): OSGB 1936 → WGS 84, EPSG 1314; WGS 72 → WGS 84, EPSG 1237;
+        // Parameter sets (from memory): OSGB 1936 → WGS 84, EPSG 1314; WGS 72 → WGS 84 as in the IOGP
+        // example (ds 0.219 ppm; EPSG 1237 has 0.2263 ppm);
         // ED50 → WGS 84, EPSG 1133 (3 parameters).
         check("airy", Ellipsoids.AIRY_1830, 446.448, -125.157, 542.06, 0.15, 0.247, 0.842, -20.489);
         check("WGS72", Ellipsoids.WGS72, 0, 0, 4.5, 0, 0, 0.554, 0.219);

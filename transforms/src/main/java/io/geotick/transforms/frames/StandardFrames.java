@@ -102,10 +102,12 @@ public final class StandardFrames {
             Optional.of(Epoch.from(LocalDate.of(2024, 1, 7))), align + " (G2139 ≈ ITRF2014)", 0.02, caution));
         b.add(FrameLink.alignmentByDate(WGS84, ITRF2020, Epoch.from(LocalDate.of(2024, 1, 7)), Optional.empty(),
             align + " (G2296 ≈ ITRF2020)", 0.02, caution));
-        b.add(FrameLink.helmert(WGS72, WGS84, HelmertParameters.of(0, 0, 4.5, 0, 0, 0.554, 0.219),
+        // DMA/NIMA TR8350.2 set (ds = 0.2263 ppm). The IOGP Guidance Note 7-2 worked example uses
+        // ds = 0.219 ppm instead; the two differ by 0.0073 ppm, up to 5 cm at the Earth's surface.
+        b.add(FrameLink.helmert(WGS72, WGS84, HelmertParameters.of(0, 0, 4.5, 0, 0, 0.554, 0.2263),
             RotationConvention.POSITION_VECTOR, 1237,
-            "IOGP Guidance Note 7-2 example / EPSG transformation 1237, WGS 72 to WGS 84 (1) (values and code"
-                + " from memory)", 2.0));
+            "EPSG transformation 1237, WGS 72 to WGS 84 (1), from NIMA TR8350.2 (values and code from memory;"
+                + " the values agree with the EPSG-derived definitions bundled with Proj4J)", 2.0));
         b.add(FrameLink.geocentricTranslations(ED50, WGS84, -87, -98, -121, 1133,
             "EPSG transformation 1133, ED50 to WGS 84 (1), DMA mean for western Europe (values and code from"
                 + " memory)", 10.0,
