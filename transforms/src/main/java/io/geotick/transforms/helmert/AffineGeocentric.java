@@ -79,7 +79,8 @@ final class AffineGeocentric implements GeocentricTransform {
             double x = in[k];
             double y = in[k + 1];
             double z = in[k + 2];
-            if (!Double.isFinite(x) || !Double.isFinite(y) || !Double.isFinite(z)) {
+            // One branch for all three: v·0 is ±0 for finite v and NaN for NaN or ±∞.
+            if (!Double.isFinite(x * 0 + y * 0 + z * 0)) {
                 throw new InvalidCoordinateException("point " + i + ": (" + x + ", " + y + ", " + z
                     + ") m is not a finite ECEF position");
             }
