@@ -26,6 +26,14 @@ import org.hipparchus.linear.RealMatrix;
  * and the inverse uses the transpose. The conversion is exact (a rotation and a translation); the
  * result is within a few ulps of the coordinates involved. NED and AER are re-expressions of ENU
  * ({@link Enu#toNed()}, {@link Aer#fromEnu(Enu)}).
+ *
+ * <p>Every conversion exists between ECEF or geodetic coordinates (on this frame's ellipsoid) and each of
+ * ENU, NED and AER, for single points and as allocation-free array variants over interleaved triples
+ * ({@code ecefToEnu}, {@code geodeticToAer}, …) whose results are bit-for-bit the single-point ones.
+ * Vectors (velocities, baselines) rotate without translation, and 3×3 covariances rotate as R C Rᵀ;
+ * {@link #accuracyOf} derives the accuracy figures of an ECEF covariance in this frame. Invalid input
+ * (non-finite values, results that overflow, points with no geodetic coordinates) is an
+ * {@link InvalidCoordinateException} or {@link InvalidCovarianceException} naming the value.
  */
 public final class LocalFrame {
     private final Ellipsoid ellipsoid;
@@ -165,7 +173,7 @@ public final class LocalFrame {
     public Vector3D rotateToEnu(Vector3D ecef) {
         double[] out = new double[3];
         rotateToEnu(ecef.getX(), ecef.getY(), ecef.getZ(), out, 0);
-        checkFinite(out, 0, ecef, -1);
+        checkFinite(out, ecef);
         return new Vector3D(out[0], out[1], out[2]);
     }
 
@@ -177,7 +185,7 @@ public final class LocalFrame {
     public Vector3D rotateToEcef(Vector3D enu) {
         double[] out = new double[3];
         rotateToEcef(enu.getX(), enu.getY(), enu.getZ(), out, 0);
-        checkFinite(out, 0, enu, -1);
+        checkFinite(out, enu);
         return new Vector3D(out[0], out[1], out[2]);
     }
 
@@ -441,8 +449,8 @@ public final class LocalFrame {
         }
     }
 
-    private static void checkFinite(double[] out, int o, Vector3D v, int i) {
-        if (!(Double.isFinite(out[o]) && Double.isFinite(out[o + 1]) && Double.isFinite(out[o + 2]))) {
+    private static void checkFinite(double[] out, Vector3D v) {
+        if (!(Double.isFinite(out[0]) && Double.isFinite(out[1]) && Double.isFinite(out[2]))) {
             throw new InvalidCoordinateException("vector " + v + " is not finite (or its rotation overflows)");
         }
     }

@@ -184,7 +184,7 @@ class AnglesTest {
     @Test
     void formattedValuesParseBackWithinHalfAUnitOfTheLastDigit() {
         Random rnd = new Random(7L);
-        for (int i = 0; i < 5000; i++) {
+        for (int i = 0; i < 2000; i++) {
             double lat = -90 + 180 * rnd.nextDouble();
             double lon = -180 + 540 * rnd.nextDouble();
             int decimals = rnd.nextInt(Angles.MAX_DECIMALS + 1);

@@ -160,6 +160,8 @@ class EllipsoidTest {
             .isInstanceOf(InvalidCoordinateException.class).hasMessageContaining("6100000.0");
         assertThatThrownBy(() -> Ellipsoid.ofSemiAxes("x", 6e6, -1, "s"))
             .isInstanceOf(InvalidCoordinateException.class);
+        assertThatThrownBy(() -> Ellipsoid.ofSemiAxes("x", 6e6, 1e-12, "s"))
+            .isInstanceOf(InvalidCoordinateException.class).hasMessageContaining("too small");
         assertThatThrownBy(() -> Ellipsoid.ofSemiAxes(null, 6e6, 6e6, "s")).isInstanceOf(NullPointerException.class);
         assertThatThrownBy(() -> Ellipsoid.ofSemiAxes(" ", 6e6, 6e6, "s"))
             .isInstanceOf(IllegalArgumentException.class);
