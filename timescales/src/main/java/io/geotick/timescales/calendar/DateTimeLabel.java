@@ -5,7 +5,6 @@ import io.geotick.timescales.encoding.DecimalSeconds;
 import java.time.DateTimeException;
 import java.time.LocalDate;
 import java.time.Month;
-import java.time.format.TextStyle;
 import java.util.Locale;
 import java.util.Objects;
 
@@ -57,7 +56,8 @@ public final class DateTimeLabel implements Comparable<DateTimeLabel> {
         try {
             date = LocalDate.of(year, month, day);
         } catch (DateTimeException e) {
-            String monthName = Month.of(month).getDisplayName(TextStyle.FULL, Locale.ROOT);
+            String name = Month.of(month).name();
+            String monthName = name.charAt(0) + name.substring(1).toLowerCase(Locale.ROOT);
             throw new TimeInputException("day " + day + " does not exist in " + monthName + " " + year + in, e);
         }
         return new DateTimeLabel(date, hour, minute, second, nano);

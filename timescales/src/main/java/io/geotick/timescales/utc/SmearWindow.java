@@ -15,10 +15,10 @@ import java.time.Duration;
  * @param length the window's length in UTC label time
  */
 public record SmearWindow(Duration start, Duration length) {
+    private static final Duration MAX = Duration.ofDays(30);
+
     /** 24 hours centred on the leap second (common practice). */
     public static final SmearWindow CENTRED_24H = new SmearWindow(Duration.ofHours(-12), Duration.ofHours(24));
-
-    private static final Duration MAX = Duration.ofDays(30);
 
     public SmearWindow {
         if (length.isNegative() || length.isZero() || length.compareTo(MAX) > 0) {
