@@ -20,7 +20,7 @@ public final class LeapOptions {
 
     @Option(names = "--smear-start", paramLabel = "DURATION",
         description = "Start of the smear window relative to the leap second, ISO 8601 duration "
-            + "(default: -PT12H).")
+            + "such as PT-12H (a minus sign inside: before the leap second; default: PT-12H).")
     Duration smearStart;
 
     @Option(names = "--smear-length", paramLabel = "DURATION",
