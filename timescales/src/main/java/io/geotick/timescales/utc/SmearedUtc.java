@@ -5,21 +5,21 @@ import io.geotick.timescales.ScaleInstant;
 import io.geotick.timescales.TimeInputException;
 import io.geotick.timescales.TimeWarning;
 import io.geotick.timescales.calendar.DateTimeLabel;
-import io.geotick.timescales.leap.LeapEntry;
-import io.geotick.timescales.leap.LeapTable;
 import java.math.BigInteger;
+import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 
 /**
  * The smeared-UTC clock: UTC outside the smear windows; inside a window of label length L around a leap
- * second of &delta; = &plusmn;1 s, the clock runs at the constant rate L / (L + &delta;) so that it covers L of
+ * step of &delta; ( * second of &delta; = &plusmn;1 s, the clock runsplusmn;1 s since 1972), the clock runs at the constant rate L / (L + &delta;) so that it covers L of
  * labels while L + &delta; SI seconds pass, and never shows 23:59:60.
  *
  * <p>Formula: for TAI t in [W0, W1), label = S + (t &minus; W0) &times; L / (W1 &minus; W0), where S is the window's
- * first UTC label and W0, W1 = TAI of the UTC labels S and S + L (so W1 &minus; W0 = L + &delta;). The rational
- * result is rounded half-even to the nanosecond (&le; 0.5 ns; reported when inexact). Only the leap seconds of
- * the leap table (1972-07-01 onwards) are smeared; the 1961&ndash;1971 steps are not. Immutable.
+ * first UTC label and W0, W1 = TAI of the UTC labels S and S + L (so W1 &minus; W0 = L + &delta; since 1972). The rational
+ * result is rounded half-even to the nanosecond (&le; 0.5 ns; reported when inexact). Every step of UTC is
+ * smeared the same way: the leap seconds, the 0.107758 s step into 1972 and the fractional steps of
+ * 1961&ndash;1968, so a smeared clock never shows second 60. Immutable.
  */
 public final class SmearedUtc {
     private static final long NANOS = 1_000_000_000L;
@@ -35,26 +35,30 @@ public final class SmearedUtc {
     public SmearedUtc(UtcModel utc, SmearWindow window) {
         this.utc = utc;
         this.window = window;
-        LeapTable table = utc.leapTable();
-        List<LeapEntry> e = table.entries();
-        int n = e.size() - 1;
+        List<LocalDate> steps = utc.stepDates();
+        int n = steps.size();
         labelStart = new long[n];
         labelEnd = new long[n];
         taiStart = new long[n];
         taiEnd = new long[n];
         for (int k = 0; k < n; k++) {
-            LeapEntry before = e.get(k);
-            LeapEntry after = e.get(k + 1);
-            long leapLabel = after.effective().toEpochDay() * DateTimeLabel.NANOS_PER_DAY;
+            long leapLabel = steps.get(k).toEpochDay() * DateTimeLabel.NANOS_PER_DAY;
             labelStart[k] = leapLabel + window.startNanos();
             labelEnd[k] = labelStart[k] + window.lengthNanos();
-            taiStart[k] = labelStart[k] + before.taiMinusUtc() * NANOS;
-            taiEnd[k] = labelEnd[k] + after.taiMinusUtc() * NANOS;
             if (k > 0 && labelStart[k] < labelEnd[k - 1]) {
-                throw new TimeInputException("smear window " + window + " is too long: the windows of the leap "
-                    + "seconds before " + before.effective() + " and " + after.effective() + " overlap");
+                throw new TimeInputException("smear window " + window + " is too long: the windows of the steps on "
+                    + steps.get(k - 1) + " and " + steps.get(k) + " overlap");
             }
+            taiStart[k] = taiNanos(utc, labelStart[k]);
+            taiEnd[k] = taiNanos(utc, labelEnd[k]);
         }
+    }
+
+    private static long taiNanos(UtcModel utc, long labelNanos) {
+        DateTimeLabel l = DateTimeLabel.ofEpochDay(Math.floorDiv(labelNanos, DateTimeLabel.NANOS_PER_DAY),
+            Math.floorMod(labelNanos, DateTimeLabel.NANOS_PER_DAY));
+        ScaleInstant t = utc.toTai(l).value();
+        return t.taiSeconds() * NANOS + t.nano();
     }
 
     /** The window used. */

@@ -240,6 +240,20 @@ public final class UtcModel {
         });
     }
 
+    /**
+     * The UTC dates at whose start TAI &minus; UTC steps (up or down), oldest first: the fractional steps of
+     * 1961&ndash;1971, the 0.107758 s step into 1972-01-01 and every leap second since.
+     */
+    public List<LocalDate> stepDates() {
+        List<LocalDate> out = new ArrayList<>();
+        for (int i = 1; i < count; i++) {
+            if (stepNanos[i] != 0) {
+                out.add(LocalDate.ofEpochDay(startDay[i]));
+            }
+        }
+        return List.copyOf(out);
+    }
+
     /** True if a TAI instant is at or after the table's expiry. */
     public boolean isPastExpiry(ScaleInstant tai) {
         return tai.taiSeconds() >= expiryTaiSeconds;
