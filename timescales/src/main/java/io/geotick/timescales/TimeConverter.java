@@ -194,7 +194,7 @@ public final class TimeConverter {
     public Conversion<ScaleInstant> fromUnix(UnixTime u) {
         DateTimeLabel label = u.toLabel();
         Conversion<ScaleInstant> r = fromLabel(TimeScale.UTC, label);
-        return r.withWarnings(ambiguity("Unix time " + u, label));
+        return r.withWarnings(ambiguity(() -> "Unix time " + u, label));
     }
 
     /** The NTP timestamp of an instant (the fraction rounded to 2^-32 s; see {@link NtpTimestamp}). */
@@ -221,8 +221,8 @@ public final class TimeConverter {
     public Conversion<ScaleInstant> fromJulianDate(JulianDate jd) {
         DateTimeLabel label = jd.toLabel();
         Conversion<ScaleInstant> r = fromLabel(jd.scale(), label);
-        return jd.scale() == TimeScale.UTC ? r.withWarnings(ambiguity("MJD " + jd.mjdDecimal().toPlainString(), label))
-            : r;
+        return jd.scale() == TimeScale.UTC
+            ? r.withWarnings(ambiguity(() -> "MJD " + jd.mjdDecimal().toPlainString(), label)) : r;
     }
 
     /** TAI &minus; UTC at an instant (the offset before the step inside a leap second). */
@@ -240,9 +240,9 @@ public final class TimeConverter {
             + encoding + " has no value of its own for it and repeats the value of the following second");
     }
 
-    private List<TimeWarning> ambiguity(String what, DateTimeLabel label) {
+    private List<TimeWarning> ambiguity(java.util.function.Supplier<String> what, DateTimeLabel label) {
         return utc.stepJustBefore(label).map(d -> List.of(new TimeWarning(TimeWarning.Kind.LEAP_SECOND_REPEAT,
-            what + " also names the leap second " + d + "T23:59:60" + fractionOf(label)
+            what.get() + " also names the leap second " + d + "T23:59:60" + fractionOf(label)
                 + "Z; read as the later second " + label + "Z"))).orElse(List.of());
     }
 

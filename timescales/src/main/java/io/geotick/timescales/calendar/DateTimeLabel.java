@@ -202,7 +202,17 @@ public final class DateTimeLabel implements Comparable<DateTimeLabel> {
     @Override
     public String toString() {
         StringBuilder sb = new StringBuilder(32);
-        sb.append(String.format("%04d-%02d-%02dT%02d:%02d:%02d", year(), month(), day(), hour, minute, second));
+        DecimalSeconds.pad(sb, year(), 4);
+        sb.append('-');
+        DecimalSeconds.pad(sb, month(), 2);
+        sb.append('-');
+        DecimalSeconds.pad(sb, day(), 2);
+        sb.append('T');
+        DecimalSeconds.pad(sb, hour, 2);
+        sb.append(':');
+        DecimalSeconds.pad(sb, minute, 2);
+        sb.append(':');
+        DecimalSeconds.pad(sb, second, 2);
         DecimalSeconds.appendFraction(sb, nano);
         return sb.toString();
     }

@@ -171,8 +171,18 @@ public final class DecimalSeconds implements Comparable<DecimalSeconds> {
         if (nanos == 0) {
             return;
         }
-        String digits = String.format("%09d", nanos);
-        int len = digits.endsWith("000000") ? 3 : digits.endsWith("000") ? 6 : 9;
-        sb.append('.').append(digits, 0, len);
+        int len = nanos % 1_000_000 == 0 ? 3 : nanos % 1_000 == 0 ? 6 : 9;
+        long v = len == 3 ? nanos / 1_000_000 : len == 6 ? nanos / 1_000 : nanos;
+        sb.append('.');
+        pad(sb, v, len);
+    }
+
+    /** Appends {@code v} (non-negative) zero-padded to {@code width} digits. */
+    public static void pad(StringBuilder sb, long v, int width) {
+        String d = Long.toString(v);
+        for (int i = d.length(); i < width; i++) {
+            sb.append('0');
+        }
+        sb.append(d);
     }
 }

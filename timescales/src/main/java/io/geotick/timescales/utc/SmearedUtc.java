@@ -11,15 +11,15 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * The smeared-UTC clock: UTC outside the smear windows; inside a window of label length L around a leap
- * step of &delta; ( * second of &delta; = &plusmn;1 s, the clock runsplusmn;1 s since 1972), the clock runs at the constant rate L / (L + &delta;) so that it covers L of
+ * The smeared-UTC clock: UTC outside the smear windows; inside a window of label length L around a step of
+ * &delta; (a leap second: &plusmn;1 s), the clock runs at the constant rate L / (L + &delta;) so that it covers L of
  * labels while L + &delta; SI seconds pass, and never shows 23:59:60.
  *
- * <p>Formula: for TAI t in [W0, W1), label = S + (t &minus; W0) &times; L / (W1 &minus; W0), where S is the window's
- * first UTC label and W0, W1 = TAI of the UTC labels S and S + L (so W1 &minus; W0 = L + &delta; since 1972). The rational
- * result is rounded half-even to the nanosecond (&le; 0.5 ns; reported when inexact). Every step of UTC is
- * smeared the same way: the leap seconds, the 0.107758 s step into 1972 and the fractional steps of
- * 1961&ndash;1968, so a smeared clock never shows second 60. Immutable.
+ * <p>Formula: for TAI t in [W0, W1), label = S + (t &minus; W0) &times; L / (W1 &minus; W0), where S is the
+ * window's first UTC label and W0, W1 = TAI of the UTC labels S and S + L (so W1 &minus; W0 = L + &delta; since
+ * 1972). The rational result is rounded half-even to the nanosecond (&le; 0.5 ns; reported when inexact).
+ * Every step of UTC is smeared the same way: the leap seconds, the 0.107758 s step into 1972 and the
+ * fractional steps of 1961&ndash;1968, so a smeared clock never shows second 60. Immutable.
  */
 public final class SmearedUtc {
     private static final long NANOS = 1_000_000_000L;

@@ -54,6 +54,11 @@ public final class UtcModel {
     private final long[] leapOffset;
     private final long expiryTaiSeconds;
     private final TimeWarning expiredWarning;
+    // Day-indexed lookup tables for the leap era: entry d is the leap index in force at the start of
+    // Unix day (resp. TAI day) firstTableDay + d; days after the table use the last index.
+    private final long firstTableDay;
+    private final short[] indexByUnixDay;
+    private final short[] indexByTaiDay;
 
     private UtcModel(LeapTable table) {
         this.table = table;
@@ -94,6 +99,18 @@ public final class UtcModel {
         }
         expiryTaiSeconds = table.expires().toEpochDay() * 86_400L + leapOffset[n - 1];
         expiredWarning = TimeWarning.expired(table.expires());
+        if (n > Short.MAX_VALUE) {
+            throw new IllegalArgumentException("too many leap-table entries: " + n);
+        }
+        firstTableDay = startDay[firstLeap];
+        int days = (int) (startDay[count - 1] - firstTableDay + 2);
+        indexByUnixDay = new short[days];
+        indexByTaiDay = new short[days];
+        for (int d = 0; d < days; d++) {
+            long unixDayStart = (firstTableDay + d) * 86_400L;
+            indexByUnixDay[d] = (short) searchUnix(unixDayStart);
+            indexByTaiDay[d] = (short) Math.max(0, searchTai(unixDayStart));
+        }
     }
 
     /** The model for a leap table (preceded by the built-in 1961&ndash;1971 table). */
@@ -112,6 +129,10 @@ public final class UtcModel {
 
     /** Index of the segment holding UTC day {@code epochDay}, or -1 before 1961. */
     private int segmentOfDay(long epochDay) {
+        if (epochDay >= firstTableDay) {
+            long d = epochDay - firstTableDay;
+            return firstLeap + (d < indexByUnixDay.length ? indexByUnixDay[(int) d] : leapStartUnix.length - 1);
+        }
         int lo = 0;
         int hi = count - 1;
         if (epochDay >= startDay[hi]) {
@@ -289,6 +310,27 @@ public final class UtcModel {
     // ---- allocation-free primitives for the leap-second era (1972-01-01 onwards) ----
 
     private int leapIndexOfUnix(long unixSeconds) {
+        long d = Math.floorDiv(unixSeconds, 86_400L) - firstTableDay;
+        if (d < 0) {
+            return -1;
+        }
+        return d < indexByUnixDay.length ? indexByUnixDay[(int) d] : leapStartUnix.length - 1;
+    }
+
+    private int leapIndexOfTai(long taiSeconds) {
+        long d = Math.floorDiv(taiSeconds, 86_400L) - firstTableDay;
+        if (d < 0) {
+            return taiSeconds < leapStartTai[0] ? -1 : 0;
+        }
+        if (d >= indexByTaiDay.length) {
+            return leapStartTai.length - 1;
+        }
+        int k = indexByTaiDay[(int) d];
+        // at most one step inside a TAI day (it starts a few tens of seconds after the TAI midnight)
+        return k + 1 < leapStartTai.length && taiSeconds >= leapStartTai[k + 1] ? k + 1 : k;
+    }
+
+    private int searchUnix(long unixSeconds) {
         int hi = leapStartUnix.length - 1;
         if (unixSeconds >= leapStartUnix[hi]) {
             return hi;
@@ -308,7 +350,7 @@ public final class UtcModel {
         return lo;
     }
 
-    private int leapIndexOfTai(long taiSeconds) {
+    private int searchTai(long taiSeconds) {
         int hi = leapStartTai.length - 1;
         if (taiSeconds >= leapStartTai[hi]) {
             return hi;
@@ -372,8 +414,8 @@ public final class UtcModel {
     // ---- helpers ----
 
     private int segmentOfTai(long s, int nano) {
-        if (s > Long.MAX_VALUE / NANOS - 1) {
-            return count - 1;
+        if (s >= leapStartTai[0]) {
+            return firstLeap + leapIndexOfTai(s);
         }
         if (s < Long.MIN_VALUE / NANOS + 1) {
             return -1;
