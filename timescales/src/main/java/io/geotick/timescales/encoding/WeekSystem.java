@@ -97,8 +97,9 @@ public enum WeekSystem {
     public WeekTime weekTime(ScaleInstant t) {
         DecimalSeconds s = secondsSinceEpoch(t);
         if (s.isNegative()) {
-            throw new TimeInputException(t + " is before the " + label + " epoch " + epoch + "T00:00:00 "
-                + scale.id().toUpperCase(java.util.Locale.ROOT) + ": no week number");
+            throw new TimeInputException("no " + label + " week number: the instant is "
+                + DecimalSeconds.ZERO.minus(s) + " s before the " + label + " epoch " + epoch + "T00:00:00 "
+                + scale.id().toUpperCase(java.util.Locale.ROOT));
         }
         long week = s.seconds() / SECONDS_PER_WEEK;
         return new WeekTime(this, week, DecimalSeconds.of(s.seconds() % SECONDS_PER_WEEK, s.nano()));
