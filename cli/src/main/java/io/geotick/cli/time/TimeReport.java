@@ -70,8 +70,8 @@ final class TimeReport {
             fields.put(wk[i] + "_week", weeks[i] == null ? null : weeks[i].week());
             fields.put(wk[i] + "_tow", weeks[i] == null ? null : new Num(weeks[i].timeOfWeek().toString()));
         }
-        DecimalSeconds gpss = WeekSystem.GPS.secondsSinceEpoch(t);
-        fields.put("gps_seconds", new Num(gpss.toString()));
+        DecimalSeconds gpss = attempt(() -> Conversion.exact(WeekSystem.GPS.secondsSinceEpoch(t)));
+        fields.put("gps_seconds", gpss == null ? null : new Num(gpss.toString()));
         UnixTime unix = attempt(() -> tc.toUnix(t));
         fields.put("unix", unix == null ? null : new Num(unix.toString()));
         NtpTimestamp ntp = unix == null ? null : NtpTimestamp.ofUnix(unix);
@@ -106,14 +106,15 @@ final class TimeReport {
         for (int i = 0; i < 3; i++) {
             String w = weeks[i] == null ? "" : "   week " + weeks[i].week() + (i == 2 ? "  sow " : "  tow ")
                 + weeks[i].timeOfWeek();
-            row(wk[i], names[i], iso[ws[i].ordinal()] + w);
+            String label = iso[ws[i].ordinal()];
+            row(wk[i], names[i], (label == null ? "-" : label) + w);
         }
         row("glonass", "GLONASS", iso[TimeScale.GLONASS.ordinal()]);
         row("smeared-utc", "smeared UTC", iso[TimeScale.SMEARED_UTC.ordinal()]);
         row("unix", "Unix", unix == null ? null : unix.toString());
         row("ntp", "NTP", ntp == null ? null : ntpSec + "   (era " + ntp.era() + ", 64-bit " + ntp.toHex() + ")");
         row("ptp", "PTP", ptp == null ? null : ptp.toString());
-        row("gpss", "GPS seconds", gpss.toString());
+        row("gpss", "GPS seconds", gpss == null ? null : gpss.toString());
         row("mjd", "MJD (UTC)", jdUtc == null ? null : jdUtc.mjdDecimal().toPlainString());
         row("jd", "JD (UTC)", jdUtc == null ? null : jdUtc.jdDecimal().toPlainString());
         row("mjd", "MJD (TT)", jdTt == null ? null : jdTt.mjdDecimal().toPlainString());
@@ -132,9 +133,10 @@ final class TimeReport {
             note(c.warnings());
             return c.value();
         } catch (IllegalArgumentException e) {
-            if (!warnings.contains(e.getMessage())) {
-                warnings.add(e.getMessage());
-            }
+            addWarning(e.getMessage());
+            return null;
+        } catch (ArithmeticException e) {
+            addWarning("a representation is out of range for this instant");
             return null;
         }
     }

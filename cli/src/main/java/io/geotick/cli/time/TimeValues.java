@@ -51,6 +51,8 @@ public final class TimeValues {
     public static Conversion<ScaleInstant> parse(String raw, TimeConverter tc, Context ctx) {
         try {
             return parseValue(raw, tc, ctx);
+        } catch (ArithmeticException e) {
+            throw new UserInputException("'" + raw.trim() + "' is out of range", e);
         } catch (IllegalArgumentException e) {
             if (e.getMessage() != null && e.getMessage().contains(raw.trim())) {
                 throw e;

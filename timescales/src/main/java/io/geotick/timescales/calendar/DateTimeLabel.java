@@ -187,9 +187,10 @@ public final class DateTimeLabel implements Comparable<DateTimeLabel> {
      */
     public DateTimeLabel shiftedKeepingLeapSecond(long seconds) {
         boolean leap = second == 60;
-        long epochNanos = Math.addExact(Math.multiplyExact(epochDay(), NANOS_PER_DAY),
-            (secondOfDay() - (leap ? 1 : 0) + seconds) * NANOS + nano);
-        DateTimeLabel l = ofEpochDay(Math.floorDiv(epochNanos, NANOS_PER_DAY), Math.floorMod(epochNanos, NANOS_PER_DAY));
+        long epochSecond = Math.addExact(Math.addExact(Math.multiplyExact(epochDay(), 86_400L),
+            secondOfDay() - (leap ? 1 : 0)), seconds);
+        DateTimeLabel l = ofEpochDay(Math.floorDiv(epochSecond, 86_400L),
+            Math.floorMod(epochSecond, 86_400L) * NANOS + nano);
         return leap ? new DateTimeLabel(l.date, l.hour, l.minute, 60, l.nano) : l;
     }
 

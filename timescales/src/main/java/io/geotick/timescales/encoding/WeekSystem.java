@@ -117,6 +117,6 @@ public enum WeekSystem {
 
     /** Allocation-free: the scale seconds since its 1970 label for a full week and whole second of week. */
     public long scaleSecondsOf(long week, long secondOfWeek) {
-        return epochScaleSeconds + week * SECONDS_PER_WEEK + secondOfWeek;
+        return epochScaleSeconds + Math.multiplyExact(week, SECONDS_PER_WEEK) + secondOfWeek;
     }
 }

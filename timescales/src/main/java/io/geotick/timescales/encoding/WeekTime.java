@@ -21,6 +21,8 @@ import java.util.regex.Pattern;
  * @param timeOfWeek   seconds of the week, 0 &le; tow &lt; 604 800
  */
 public record WeekTime(WeekSystem system, long week, DecimalSeconds timeOfWeek) {
+    /** Largest full week accepted (beyond year 9999 of every week system). */
+    public static final long MAX_WEEK = 999_999L;
     private static final Pattern WEEK_TOW = Pattern.compile("\\s*(-?\\d+)\\s*:\\s*([^:]+?)\\s*");
 
     public WeekTime {
@@ -28,6 +30,9 @@ public record WeekTime(WeekSystem system, long week, DecimalSeconds timeOfWeek) 
         Objects.requireNonNull(timeOfWeek, "timeOfWeek");
         if (week < 0) {
             throw new TimeInputException(system.label() + " week " + week + " is negative");
+        }
+        if (week > MAX_WEEK) {
+            throw new TimeInputException(system.label() + " week " + week + " is out of range 0-" + MAX_WEEK);
         }
         if (timeOfWeek.isNegative() || timeOfWeek.seconds() >= WeekSystem.SECONDS_PER_WEEK) {
             throw new TimeInputException(system.label() + " time of week " + timeOfWeek
@@ -96,7 +101,8 @@ public record WeekTime(WeekSystem system, long week, DecimalSeconds timeOfWeek) 
 
     /** The instant, read on the system's scale. */
     public ScaleInstant toInstant() {
-        return system.fromSecondsSinceEpoch(DecimalSeconds.of(week * WeekSystem.SECONDS_PER_WEEK, 0).plus(timeOfWeek));
+        return system.fromSecondsSinceEpoch(DecimalSeconds.of(Math.multiplyExact(week, WeekSystem.SECONDS_PER_WEEK), 0)
+            .plus(timeOfWeek));
     }
 
     /** The week number modulo 2<sup>bits</sup>, as broadcast in a field of that width. */
