@@ -186,6 +186,21 @@ class TimeCommandTest {
         });
     }
 
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(delimiter = ';', value = {
+        "utc; 9999-12-31T23:59:59Z", "glonass; 9999-12-31T23:00:00", "tai; 0000-01-01T00:00:00",
+        "utc; unix:253402300799", "utc; ptp:281474976710655", "gps; 99999999999999:0", "utc; gpss:-999999999999",
+        "utc; ntp:99999999999999999999", "tt; mjd:99999999999", "tt; jd:0",
+    })
+    void extremeValuesAreAnsweredOrRefusedNeverAnInternalError(String scale, String value) {
+        CliRun r = CliRun.of("time", "--json", "--in", scale, value);
+        assertThat(r.code()).as(r.err()).isIn(0, 2);
+        assertThat(r.err()).doesNotContain("internal error");
+        if (r.code() == 2) {
+            assertThat(r.err()).contains(value);
+        }
+    }
+
     @Test
     void smearWindowIsConfigurable() {
         JsonNode d = CliRun.of("time", "--json", "2016-12-31T23:00:00Z").json();
