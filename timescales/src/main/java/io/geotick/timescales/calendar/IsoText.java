@@ -3,6 +3,7 @@ package io.geotick.timescales.calendar;
 import io.geotick.timescales.Conversion;
 import io.geotick.timescales.TimeInputException;
 import io.geotick.timescales.TimeWarning;
+import io.geotick.timescales.encoding.DecimalSeconds;
 import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -50,24 +51,12 @@ public record IsoText(DateTimeLabel label, boolean zoned, int offsetSeconds, boo
         int minute = m.group(6) == null ? 0 : Integer.parseInt(m.group(6));
         int second = m.group(7) == null ? 0 : Integer.parseInt(m.group(7));
         String frac = m.group(8) == null ? "" : m.group(8);
-        long nano = 0;
-        for (int i = 0; i < 9; i++) {
-            nano = nano * 10 + (i < frac.length() ? frac.charAt(i) - '0' : 0);
-        }
-        boolean rounded = false;
-        if (frac.length() > 9 && !frac.substring(9).chars().allMatch(c -> c == '0')) {
-            rounded = true;
-            String rest = frac.substring(9);
-            int first = rest.charAt(0) - '0';
-            boolean tail = rest.substring(1).chars().anyMatch(c -> c != '0');
-            if (first > 5 || (first == 5 && (tail || nano % 2 == 1))) {
-                nano++;
-            }
-        }
-        boolean carry = nano == 1_000_000_000L;
-        if (carry) {
-            nano = 999_999_999L; // the last nanosecond is added to the instant, not the label (see carryNano)
-        }
+        // the fraction, rounded half-even to the nanosecond; .9999999995 and above rounds to a whole second
+        DecimalSeconds f = frac.isEmpty() ? DecimalSeconds.ZERO
+            : DecimalSeconds.parse("0." + frac, "fraction of '" + text + "'").value();
+        boolean rounded = frac.length() > 9 && !frac.substring(9).chars().allMatch(c -> c == '0');
+        boolean carry = f.seconds() == 1;
+        long nano = carry ? 999_999_999L : f.nano(); // the last nanosecond is added to the instant (see carryNano)
         DateTimeLabel label = m.group(4) != null
             ? DateTimeLabel.ofYearDay(year, Integer.parseInt(m.group(4)), hour, minute, second, (int) nano, text)
             : DateTimeLabel.of(year, Integer.parseInt(m.group(2)), Integer.parseInt(m.group(3)), hour, minute,
