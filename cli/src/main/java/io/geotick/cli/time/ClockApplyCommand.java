@@ -29,10 +29,13 @@ import picocli.CommandLine.Spec;
 
 /** {@code geotick clock apply}: map device timestamps onto the reference scale with a fitted model. */
 @Command(name = "apply", mixinStandardHelpOptions = true,
-    description = {"Correct device timestamps with a model written by 'geotick clock fit'.",
-        "Values are read as in 'geotick time' on the model's device scale (a bare number is Unix seconds).",
-        "With --input, one value per line (blank lines and # comments skipped); a line that cannot be",
-        "read is reported as an error row and the exit code is 5."})
+    description = {"Correct device timestamps with a fitted clock model.",
+        "",
+        "The model is a file written by 'geotick clock fit'. Values are read as",
+        "in 'geotick time', on the model's device scale (a bare number is Unix",
+        "seconds). With --input, one value per line (blank lines and # comments",
+        "skipped); a line that cannot be read becomes an error row and the exit",
+        "code is 5."})
 public final class ClockApplyCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;

@@ -36,12 +36,14 @@ import picocli.CommandLine.Spec;
 
 /** {@code geotick clock fit}: estimate a device-clock model from paired readings in a CSV file. */
 @Command(name = "fit", mixinStandardHelpOptions = true,
-    description = {"Fit offset and drift (and optionally drift rate) of a device clock by least squares.",
+    description = {"Fit a device-clock model to paired readings by least squares.",
         "",
-        "PAIRS is a CSV file with a header naming the columns 'device' (what the device clock showed) and",
-        "'reference' (the true time then); other columns are ignored, lines starting with # are comments.",
-        "Cells take the same values as 'geotick time' (ISO 8601, unix:, gpss:, ptp:, ...); a bare number is",
-        "Unix seconds. The model is written as JSON (--output FILE, or standard output with --json)."})
+        "PAIRS is a CSV file whose header names the columns 'device' (what the",
+        "device clock showed) and 'reference' (the true time then); other",
+        "columns are ignored and lines starting with # are comments. Cells take",
+        "the values of 'geotick time' (ISO 8601, unix:, gpss:, ptp:, ...); a bare",
+        "number is Unix seconds. The model is written as JSON (--output FILE, or",
+        "standard output with --json) for 'geotick clock apply'."})
 public final class ClockFitCommand implements Runnable {
     @Spec
     CommandSpec spec;

@@ -24,9 +24,12 @@ import picocli.CommandLine.Spec;
 
 /** {@code geotick leap}: the leap-second table in force and where it came from. */
 @Command(name = "leap", mixinStandardHelpOptions = true,
-    description = {"Show the leap-second table in force: its source, entries, last step, TAI - UTC now,",
-        "expiry and whether its SHA-1 hash verified. Without --file the newest verified table among the",
-        "built-in one and " + "/usr/share/zoneinfo/leap-seconds.list is used."})
+    description = {"Show the leap-second table in force.",
+        "",
+        "Prints its source, entry count, last step, TAI - UTC now (or --at),",
+        "update and expiry dates, and whether its SHA-1 hash verified. Without",
+        "--file the newest verified table among the built-in one and",
+        "/usr/share/zoneinfo/leap-seconds.list is used."})
 public final class LeapCommand implements Runnable {
     @Spec
     CommandSpec spec;
