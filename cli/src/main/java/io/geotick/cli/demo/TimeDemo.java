@@ -67,7 +67,7 @@ public final class TimeDemo {
         out.printf("  3. Motion sensor: %d readings paired with GNSS time, device clock showing %s to %s%n",
             pairs.size(), iso(tc, m.firstReading()), iso(tc, m.lastReading()));
         out.printf(Locale.ROOT, "     fitted: the sensor clock gains %.3f s/day (+/- %.3f) and was %.4f s ahead at its "
-            + "first reading;%n     residual RMS %.1f ms%n", -m.drift() * 86_400, m.sigma(1) * 86_400,
+            + "first reading;%n     residual RMS %.1f ms%n", -m.drift() * 86_400, m.sigma(1).orElseThrow() * 86_400,
             -(m.baseOffsetNanos() / 1e9 + m.offsetSeconds()), fit.residualRms() * 1e3);
         ScaleInstant sensorStamp = fix.plusNanos(sensorError(t0.nanosUntil(fix) / 1e9, 0));
         ClockModel.ClockCorrection c = m.apply(sensorStamp.to(TimeScale.UTC));

@@ -112,7 +112,8 @@ public final class ClockApplyCommand implements Callable<Integer> {
                     warnings.forEach(w::add);
                 } else {
                     out.printf("%s -> %s  (correction %s s, 1-sigma %s)%n", item[1], refText.value(), corr,
-                        Double.isFinite(c.sigmaSeconds()) ? String.format("%.3e s", c.sigmaSeconds()) : "unknown");
+                        c.sigmaSeconds().isPresent() ? String.format(java.util.Locale.ROOT, "%.3e s",
+                            c.sigmaSeconds().getAsDouble()) : "unknown");
                     warnings.forEach(w -> out.println("  warning: " + w));
                 }
             } catch (IllegalArgumentException e) {

@@ -138,8 +138,8 @@ public final class ClockFitCommand implements Runnable {
         }
     }
 
-    private static String sigma(double v, double scale, String unit) {
-        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.3e %s", v * scale, unit)
+    private static String sigma(java.util.OptionalDouble v, double scale, String unit) {
+        return v.isPresent() ? String.format(Locale.ROOT, "%.3e %s", v.getAsDouble() * scale, unit)
             : "unknown (no redundancy)";
     }
 

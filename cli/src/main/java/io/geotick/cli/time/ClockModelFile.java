@@ -16,6 +16,8 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Optional;
+import java.util.OptionalDouble;
 
 /**
  * The clock-model file: a JSON object written by {@code clock fit} and read by {@code clock apply}.
@@ -49,20 +51,20 @@ final class ClockModelFile {
         num(o, "drift_rate", m.driftRate());
         ObjectNode sigma = o.putObject("sigma");
         num(sigma, "offset_s", m.sigma(0));
-        num(sigma, "drift", m.terms().count() > 1 ? m.sigma(1) : 0.0);
-        num(sigma, "drift_rate", m.terms().count() > 2 ? m.sigma(2) : 0.0);
+        num(sigma, "drift", m.terms().count() > 1 ? m.sigma(1) : OptionalDouble.of(0.0));
+        num(sigma, "drift_rate", m.terms().count() > 2 ? m.sigma(2) : OptionalDouble.of(0.0));
         num(o, "drift_ppm", m.drift() * 1e6);
         num(o, "drift_s_per_day", m.drift() * 86_400);
-        ArrayNode cov = o.putArray("covariance");
-        for (double[] row : m.covariance()) {
-            ArrayNode r = cov.addArray();
-            for (double v : row) {
-                if (Double.isFinite(v)) {
+        if (m.covariance().isPresent()) {
+            ArrayNode cov = o.putArray("covariance");
+            for (double[] row : m.covariance().get()) {
+                ArrayNode r = cov.addArray();
+                for (double v : row) {
                     r.add(v);
-                } else {
-                    r.addNull();
                 }
             }
+        } else {
+            o.putNull("covariance");
         }
         o.put("pairs_read", fit.pairsRead());
         o.put("pairs_used", fit.pairsUsed());
@@ -79,10 +81,15 @@ final class ClockModelFile {
         return o;
     }
 
-    /** Puts a double, or null when it is not finite (unknown uncertainty). */
+    /** Puts a double. */
     static void num(ObjectNode o, String key, double v) {
-        if (Double.isFinite(v)) {
-            o.put(key, v);
+        o.put(key, v);
+    }
+
+    /** Puts a double, or null when unknown. */
+    static void num(ObjectNode o, String key, OptionalDouble v) {
+        if (v.isPresent()) {
+            o.put(key, v.getAsDouble());
         } else {
             o.putNull(key);
         }
@@ -126,18 +133,25 @@ final class ClockModelFile {
             int p = terms.count();
             double[] coeff = java.util.Arrays.copyOf(c, p);
             JsonNode cov = n.get("covariance");
-            if (cov == null || !cov.isArray() || cov.size() != p) {
-                throw bad(file, "covariance", "expected a " + p + "x" + p + " array");
-            }
-            double[][] cv = new double[p][p];
-            for (int i = 0; i < p; i++) {
-                JsonNode row = cov.get(i);
-                if (!row.isArray() || row.size() != p) {
-                    throw bad(file, "covariance", "expected a " + p + "x" + p + " array");
+            Optional<double[][]> cv = Optional.empty();
+            if (cov != null && !cov.isNull()) {
+                if (!cov.isArray() || cov.size() != p) {
+                    throw bad(file, "covariance", "expected a " + p + "x" + p + " array of numbers or null");
                 }
-                for (int j = 0; j < p; j++) {
-                    cv[i][j] = row.get(j).isNumber() ? row.get(j).doubleValue() : Double.NaN;
+                double[][] c2 = new double[p][p];
+                for (int i = 0; i < p; i++) {
+                    JsonNode row = cov.get(i);
+                    if (!row.isArray() || row.size() != p) {
+                        throw bad(file, "covariance", "expected a " + p + "x" + p + " array of numbers or null");
+                    }
+                    for (int j = 0; j < p; j++) {
+                        if (!row.get(j).isNumber()) {
+                            throw bad(file, "covariance", "entry [" + i + "][" + j + "] is not a number");
+                        }
+                        c2[i][j] = row.get(j).doubleValue();
+                    }
                 }
+                cv = Optional.of(c2);
             }
             return new ClockModel(terms, dev, ref, origin.to(dev), base, coeff, cv, first.to(dev), last.to(dev));
         } catch (DataFileException e) {

@@ -61,6 +61,23 @@ class ClockCommandTest {
     }
 
     @Test
+    void aSinglePairGivesAnOffsetWithUnknownUncertainty(@TempDir Path dir) throws IOException {
+        Path csv = dir.resolve("one.csv");
+        Files.writeString(csv, "device,reference\n2024-01-01T00:00:00Z,2024-01-01T00:00:01.5Z\n");
+        Path model = dir.resolve("one.json");
+        CliRun fit = CliRun.of("clock", "fit", "--terms", "offset", "-o", model.toString(), csv.toString());
+        assertThat(fit.code()).as(fit.err()).isZero();
+        assertThat(fit.out()).contains("unknown (no redundancy)");
+        JsonNode m = Json.MAPPER.readTree(Files.readString(model));
+        assertThat(m.get("covariance").isNull()).isTrue();
+        assertThat(m.get("sigma").get("offset_s").isNull()).isTrue();
+        CliRun apply = CliRun.of("clock", "apply", "--json", "-m", model.toString(), "2024-01-01T00:00:00Z");
+        assertThat(apply.code()).as(apply.err()).isZero();
+        assertThat(apply.json().get(0).get("reference").asText()).isEqualTo("2024-01-01T00:00:01.500Z");
+        assertThat(apply.json().get(0).get("sigma_s").isNull()).isTrue();
+    }
+
+    @Test
     void badCsvNamesTheLineOrColumn(@TempDir Path dir) throws IOException {
         Path noCol = dir.resolve("nocol.csv");
         Files.writeString(noCol, "when,truth\n1,2\n");

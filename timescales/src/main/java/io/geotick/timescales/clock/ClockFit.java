@@ -2,6 +2,7 @@ package io.geotick.timescales.clock;
 
 import io.geotick.timescales.ScaleInstant;
 import java.util.List;
+import java.util.OptionalDouble;
 
 /**
  * The outcome of a clock fit.
@@ -10,11 +11,11 @@ import java.util.List;
  * @param pairsRead      pairs given
  * @param pairsUsed      pairs in the final fit (outliers excluded when asked)
  * @param residualRms    RMS of the residuals of the used pairs, seconds
- * @param residualSigma  residual standard deviation sqrt(RSS / (n &minus; p)), seconds (NaN when n = p)
+ * @param residualSigma  residual standard deviation sqrt(RSS / (n &minus; p)), seconds (empty when n = p)
  * @param residuals      residual (observed &minus; model) of every pair, seconds, in input order
  * @param outliers       pairs whose residual exceeded the threshold
  */
-public record ClockFit(ClockModel model, int pairsRead, int pairsUsed, double residualRms, double residualSigma,
+public record ClockFit(ClockModel model, int pairsRead, int pairsUsed, double residualRms, OptionalDouble residualSigma,
                        List<Residual> residuals, List<Residual> outliers) {
     public ClockFit {
         residuals = List.copyOf(residuals);

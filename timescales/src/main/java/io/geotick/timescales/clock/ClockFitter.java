@@ -4,6 +4,8 @@ import io.geotick.timescales.ScaleInstant;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
 import org.hipparchus.exception.MathIllegalArgumentException;
 import org.hipparchus.exception.MathIllegalStateException;
 import org.hipparchus.linear.Array2DRowRealMatrix;
@@ -87,9 +89,11 @@ public final class ClockFitter {
             }
         }
         ClockPair firstPair = pairs.get(0);
+        boolean known = Double.isFinite(s.sigma);
         ClockModel model = new ClockModel(terms, firstPair.device().scale(), firstPair.reference().scale(), origin,
-            base, s.coefficients, s.covariance, origin, last);
-        return new ClockFit(model, n, count(used), s.rms, s.sigma, residuals, outliers);
+            base, s.coefficients, known ? Optional.of(s.covariance) : Optional.empty(), origin, last);
+        return new ClockFit(model, n, count(used), s.rms, known ? OptionalDouble.of(s.sigma) : OptionalDouble.empty(),
+            residuals, outliers);
     }
 
     private static int count(boolean[] used) {
@@ -118,7 +122,7 @@ public final class ClockFitter {
         double[] coefficients;
         double[][] covariance;
         double rms;
-        double sigma;
+        double sigma; // NaN (private) when there is no redundancy
         double[] residuals;
 
         double residual(int i) {

@@ -4,6 +4,8 @@ import io.geotick.timescales.ScaleInstant;
 import io.geotick.timescales.TimeScale;
 import java.util.Arrays;
 import java.util.Objects;
+import java.util.Optional;
+import java.util.OptionalDouble;
 
 /**
  * A fitted device-clock model: reference = device + c0 + offset + drift &times; &Delta; + &frac12; driftRate &times; &Delta;&sup2;,
@@ -31,26 +33,37 @@ public final class ClockModel {
      * A model from its parts (as stored in a model file).
      *
      * @param coefficients offset (s), drift (s/s), drift rate (s/s&sup2;): as many as {@code terms.count()}
-     * @param covariance   their covariance, {@code terms.count()} square; NaN entries when unknown
+     * @param covariance   their covariance, {@code terms.count()} square; empty when unknown (as many pairs
+     *                     as parameters: no redundancy)
      * @param first        the earliest device reading of the fit
      * @param last         the latest device reading of the fit
      */
     public ClockModel(ClockTerms terms, TimeScale deviceScale, TimeScale referenceScale, ScaleInstant origin,
-                      long baseOffsetNanos, double[] coefficients, double[][] covariance, ScaleInstant first,
-                      ScaleInstant last) {
+                      long baseOffsetNanos, double[] coefficients, Optional<double[][]> covariance,
+                      ScaleInstant first, ScaleInstant last) {
         this.terms = Objects.requireNonNull(terms, "terms");
         this.deviceScale = Objects.requireNonNull(deviceScale, "deviceScale");
         this.referenceScale = Objects.requireNonNull(referenceScale, "referenceScale");
         this.origin = Objects.requireNonNull(origin, "origin").to(deviceScale);
         this.baseOffsetNanos = baseOffsetNanos;
         int p = terms.count();
-        if (coefficients.length != p || covariance.length != p) {
-            throw new IllegalArgumentException("model '" + terms.id() + "' needs " + p + " coefficients and a "
-                + p + "x" + p + " covariance");
+        if (coefficients.length != p) {
+            throw new IllegalArgumentException("model '" + terms.id() + "' needs " + p + " coefficients");
         }
-        for (double[] row : covariance) {
-            if (row.length != p) {
+        double[][] cov = covariance.orElse(null);
+        if (cov != null) {
+            if (cov.length != p) {
                 throw new IllegalArgumentException("covariance must be " + p + "x" + p);
+            }
+            for (double[] row : cov) {
+                if (row.length != p) {
+                    throw new IllegalArgumentException("covariance must be " + p + "x" + p);
+                }
+                for (double v : row) {
+                    if (!Double.isFinite(v)) {
+                        throw new IllegalArgumentException("covariance entry " + v + " is not finite");
+                    }
+                }
             }
         }
         for (double c : coefficients) {
@@ -59,7 +72,7 @@ public final class ClockModel {
             }
         }
         this.coefficients = coefficients.clone();
-        this.covariance = Arrays.stream(covariance).map(double[]::clone).toArray(double[][]::new);
+        this.covariance = cov == null ? null : Arrays.stream(cov).map(double[]::clone).toArray(double[][]::new);
         this.first = Objects.requireNonNull(first, "first");
         this.last = Objects.requireNonNull(last, "last");
     }
@@ -91,9 +104,10 @@ public final class ClockModel {
         return coefficients.clone();
     }
 
-    /** Covariance of the coefficients. */
-    public double[][] covariance() {
-        return Arrays.stream(covariance).map(double[]::clone).toArray(double[][]::new);
+    /** Covariance of the coefficients; empty when unknown (no redundancy in the fit). */
+    public Optional<double[][]> covariance() {
+        return covariance == null ? Optional.empty()
+            : Optional.of(Arrays.stream(covariance).map(double[]::clone).toArray(double[][]::new));
     }
 
     /** The fitted offset at the origin, seconds (excluding the exact base offset). */
@@ -111,9 +125,9 @@ public final class ClockModel {
         return terms.count() > 2 ? coefficients[2] : 0.0;
     }
 
-    /** 1&sigma; uncertainty of coefficient {@code i}, NaN when unknown (no redundancy). */
-    public double sigma(int i) {
-        return Math.sqrt(covariance[i][i]);
+    /** 1&sigma; uncertainty of coefficient {@code i}; empty when unknown (no redundancy). */
+    public OptionalDouble sigma(int i) {
+        return covariance == null ? OptionalDouble.empty() : OptionalDouble.of(Math.sqrt(covariance[i][i]));
     }
 
     /** The earliest device reading of the fit. */
@@ -139,16 +153,20 @@ public final class ClockModel {
         for (int i = 0; i < p; i++) {
             corr += coefficients[i] * g[i];
         }
-        double var = 0;
-        for (int i = 0; i < p; i++) {
-            for (int j = 0; j < p; j++) {
-                var += g[i] * covariance[i][j] * g[j];
+        OptionalDouble sigma = OptionalDouble.empty();
+        if (covariance != null) {
+            double var = 0;
+            for (int i = 0; i < p; i++) {
+                for (int j = 0; j < p; j++) {
+                    var += g[i] * covariance[i][j] * g[j];
+                }
             }
+            sigma = OptionalDouble.of(Math.sqrt(Math.max(var, 0)));
         }
         long corrNanos = Math.addExact(baseOffsetNanos, Math.round(corr * 1e9));
         ScaleInstant ref = device.to(referenceScale).plusNanos(corrNanos);
         boolean outside = device.isBefore(first) || device.isAfter(last);
-        return new ClockCorrection(ref, corrNanos, Math.sqrt(Math.max(var, 0)), outside);
+        return new ClockCorrection(ref, corrNanos, sigma, outside);
     }
 
     /**
@@ -156,10 +174,10 @@ public final class ClockModel {
      *
      * @param reference        the reference time of the device reading
      * @param correctionNanos  reference &minus; device, nanoseconds
-     * @param sigmaSeconds     1&sigma; uncertainty of the correction from the fit's covariance (NaN if unknown)
+     * @param sigmaSeconds     1&sigma; uncertainty of the correction from the fit's covariance (empty if unknown)
      * @param extrapolated     true when the reading lies outside the span of the fitted readings
      */
-    public record ClockCorrection(ScaleInstant reference, long correctionNanos, double sigmaSeconds,
+    public record ClockCorrection(ScaleInstant reference, long correctionNanos, OptionalDouble sigmaSeconds,
                                   boolean extrapolated) {
     }
 }

@@ -38,7 +38,7 @@ class ClockFitterTest {
         double totalOffset = m.baseOffsetNanos() / 1e9 + m.offsetSeconds();
         assertThat(totalOffset).isCloseTo(2.5, within(2e-3));
         assertThat(m.drift() * 86_400).isCloseTo(-0.5, within(1e-3));
-        assertThat(m.sigma(1) * 86_400).isBetween(1e-6, 1e-3);
+        assertThat(m.sigma(1).orElseThrow() * 86_400).isBetween(1e-6, 1e-3);
         assertThat(fit.residualRms()).isCloseTo(1e-3, within(5e-4));
         assertThat(fit.outliers()).isEmpty();
         assertThat(fit.pairsUsed()).isEqualTo(48);
@@ -88,6 +88,11 @@ class ClockFitterTest {
         List<ClockPair> same = List.of(p, new ClockPair(p.device(), p.reference().plusNanos(5), 3));
         assertThatThrownBy(() -> ClockFitter.fit(same, ClockTerms.DRIFT, 3, false))
             .isInstanceOf(ClockFitException.class).hasMessageContaining("same instant");
-        assertThat(ClockFitter.fit(one, ClockTerms.OFFSET, 3, false).model().offsetSeconds()).isZero();
+        ClockFit exact = ClockFitter.fit(one, ClockTerms.OFFSET, 3, false);
+        assertThat(exact.model().offsetSeconds()).isZero();
+        // one pair, one parameter: no redundancy, so no uncertainty (empty, never NaN)
+        assertThat(exact.model().sigma(0)).isEmpty();
+        assertThat(exact.residualSigma()).isEmpty();
+        assertThat(exact.model().apply(p.device()).sigmaSeconds()).isEmpty();
     }
 }
