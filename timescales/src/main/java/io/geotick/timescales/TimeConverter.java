@@ -38,7 +38,7 @@ public final class TimeConverter {
     private TimeConverter(LeapTable table, SmearWindow window) {
         this.table = Objects.requireNonNull(table, "table");
         this.utc = UtcModel.of(table);
-        this.smeared = new SmearedUtc(utc, Objects.requireNonNull(window, "window"));
+        this.smeared = SmearedUtc.of(utc, Objects.requireNonNull(window, "window"));
     }
 
     /** A converter using {@code table} and the default 24-hour centred smear window. */

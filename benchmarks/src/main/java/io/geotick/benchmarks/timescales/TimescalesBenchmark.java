@@ -63,7 +63,7 @@ public class TimescalesBenchmark {
         }
         converter = TimeConverter.builtIn();
         utc = converter.utcModel();
-        bulk = new BulkConverter(utc);
+        bulk = BulkConverter.of(utc);
         bulk.unixToGpsWeek(unix, nanos, 0, N, weekIn, towIn);
     }
 

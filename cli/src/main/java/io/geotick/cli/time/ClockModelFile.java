@@ -153,7 +153,7 @@ final class ClockModelFile {
                 }
                 cv = Optional.of(c2);
             }
-            return new ClockModel(terms, dev, ref, origin.to(dev), base, coeff, cv, first.to(dev), last.to(dev));
+            return ClockModel.of(terms, dev, ref, origin.to(dev), base, coeff, cv, first.to(dev), last.to(dev));
         } catch (DataFileException e) {
             throw e;
         } catch (IllegalArgumentException e) {

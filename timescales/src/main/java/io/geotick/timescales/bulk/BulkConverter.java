@@ -28,8 +28,12 @@ public final class BulkConverter {
     private final UtcModel utc;
     private final long expiryTai;
 
-    /** A bulk converter over a UTC model. */
-    public BulkConverter(UtcModel utc) {
+    /** A bulk converter over a UTC model (e.g. {@code TimeConverter.utcModel()}). */
+    public static BulkConverter of(UtcModel utc) {
+        return new BulkConverter(utc);
+    }
+
+    private BulkConverter(UtcModel utc) {
         this.utc = Objects.requireNonNull(utc, "utc");
         this.expiryTai = utc.expiryTaiSeconds();
     }

@@ -90,7 +90,7 @@ public final class ClockFitter {
         }
         ClockPair firstPair = pairs.get(0);
         boolean known = Double.isFinite(s.sigma);
-        ClockModel model = new ClockModel(terms, firstPair.device().scale(), firstPair.reference().scale(), origin,
+        ClockModel model = ClockModel.of(terms, firstPair.device().scale(), firstPair.reference().scale(), origin,
             base, s.coefficients, known ? Optional.of(s.covariance) : Optional.empty(), origin, last);
         return new ClockFit(model, n, count(used), s.rms, known ? OptionalDouble.of(s.sigma) : OptionalDouble.empty(),
             residuals, outliers);

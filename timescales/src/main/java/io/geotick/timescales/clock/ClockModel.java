@@ -38,9 +38,16 @@ public final class ClockModel {
      * @param first        the earliest device reading of the fit
      * @param last         the latest device reading of the fit
      */
-    public ClockModel(ClockTerms terms, TimeScale deviceScale, TimeScale referenceScale, ScaleInstant origin,
-                      long baseOffsetNanos, double[] coefficients, Optional<double[][]> covariance,
-                      ScaleInstant first, ScaleInstant last) {
+    public static ClockModel of(ClockTerms terms, TimeScale deviceScale, TimeScale referenceScale,
+                                ScaleInstant origin, long baseOffsetNanos, double[] coefficients,
+                                Optional<double[][]> covariance, ScaleInstant first, ScaleInstant last) {
+        return new ClockModel(terms, deviceScale, referenceScale, origin, baseOffsetNanos, coefficients, covariance,
+            first, last);
+    }
+
+    private ClockModel(ClockTerms terms, TimeScale deviceScale, TimeScale referenceScale, ScaleInstant origin,
+                       long baseOffsetNanos, double[] coefficients, Optional<double[][]> covariance,
+                       ScaleInstant first, ScaleInstant last) {
         this.terms = Objects.requireNonNull(terms, "terms");
         this.deviceScale = Objects.requireNonNull(deviceScale, "deviceScale");
         this.referenceScale = Objects.requireNonNull(referenceScale, "referenceScale");

@@ -32,7 +32,11 @@ public final class SmearedUtc {
     private final long[] taiEnd;
 
     /** The smeared clock over a UTC model, with the given window. */
-    public SmearedUtc(UtcModel utc, SmearWindow window) {
+    public static SmearedUtc of(UtcModel utc, SmearWindow window) {
+        return new SmearedUtc(utc, window);
+    }
+
+    private SmearedUtc(UtcModel utc, SmearWindow window) {
         this.utc = utc;
         this.window = window;
         List<LocalDate> steps = utc.stepDates();

@@ -11,7 +11,7 @@ import org.junit.jupiter.api.Test;
 
 class BulkConverterTest {
     private final TimeConverter tc = TimeConverter.builtIn();
-    private final BulkConverter bulk = new BulkConverter(tc.utcModel());
+    private final BulkConverter bulk = BulkConverter.of(tc.utcModel());
 
     @Test
     void agreesWithTheObjectApiAroundALeapSecond() {
