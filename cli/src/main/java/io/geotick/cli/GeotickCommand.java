@@ -2,6 +2,9 @@ package io.geotick.cli;
 
 import io.geotick.cli.coord.CoordCommand;
 import io.geotick.cli.demo.DemoCommand;
+import io.geotick.cli.time.ClockCommand;
+import io.geotick.cli.time.LeapCommand;
+import io.geotick.cli.time.TimeCommand;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.ParameterException;
@@ -19,6 +22,9 @@ import picocli.CommandLine.Spec;
     subcommands = {
         CoordCommand.class,
         DemoCommand.class,
+        TimeCommand.class,
+        LeapCommand.class,
+        ClockCommand.class,
     })
 public final class GeotickCommand implements Runnable {
     @Spec
