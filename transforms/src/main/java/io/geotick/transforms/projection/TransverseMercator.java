@@ -34,13 +34,13 @@ import java.util.Objects;
  * exact mapping); rounding in double precision adds about 1 nm. Domain: longitudes within 90° of the
  * central meridian whose spherical easting satisfies |η'| ≤ {@value #MAX_ETA_PRIME}
  * (about 6 400 km of the central meridian on the equator; farther from the pole the limit is reached
- * at smaller Δλ); beyond that the truncated series grows inaccurate (there the error reaches about
- * 1 mm), and a {@link ProjectionDomainException} is thrown.
+ * at smaller Δλ); at that limit the series error is about 0.1 µm (measured against the 40-digit
+ * reference), and it grows quickly beyond, so farther points get a {@link ProjectionDomainException}.
  *
  * <p>The degree ↔ radian steps use {@link DegreeTrig} (exact degree reduction).
  */
 public final class TransverseMercator implements MapProjection {
-    /** The largest |η'| accepted: the series' error stays at the millimetre level up to here. */
+    /** The largest |η'| accepted: the series' error stays below 0.2 µm up to here. */
     public static final double MAX_ETA_PRIME = 1.0;
 
     private static final int ORDER = 6;
