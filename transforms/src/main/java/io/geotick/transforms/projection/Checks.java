@@ -54,9 +54,25 @@ final class Checks {
         return v;
     }
 
-    /** lon − lon0 reduced to [−180°, 180°] (IEEEremainder is exact). */
+    /**
+     * lon − lon0 reduced to [−180°, 180°], for |lon| ≤ 360° and |lon0| ≤ 180°. Each ±360 step is exact
+     * (Sterbenz: the difference lies within [180°, 720°] in magnitude); branches instead of
+     * {@code Math.IEEEremainder}, which is a slow library call.
+     */
     static double deltaLongitude(double longitude, double centralMeridian) {
-        return Math.IEEEremainder(longitude - centralMeridian, 360.0);
+        double d = longitude - centralMeridian;
+        if (d > 180.0) {
+            d -= 360.0;
+            if (d > 180.0) {
+                d -= 360.0;
+            }
+        } else if (d < -180.0) {
+            d += 360.0;
+            if (d < -180.0) {
+                d += 360.0;
+            }
+        }
+        return d;
     }
 
     /** A longitude (degrees) folded into (−180°, 180°]. */

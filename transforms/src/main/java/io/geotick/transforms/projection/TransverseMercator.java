@@ -245,20 +245,26 @@ public final class TransverseMercator implements MapProjection {
         double ccl = c * cl;
         double d2 = t * t + ccl * ccl;
         double d = Math.sqrt(d2);
-        double xip = Math.atan2(t, ccl);
+        // cos φ·cos λ ≥ 0 here (|Δλ| < 90°), so atan of the ratio replaces the slower atan2; at the
+        // poles (cos φ = 0) ξ' = ±π/2 exactly.
+        double xip = ccl > 0 ? Math.atan(t / ccl) : Math.copySign(Math.PI / 2, t);
         double shp = c * sl / d;
         double chp2 = 1 + shp * shp;
-        double etap = Conformal.asinh(shp);
-        if (!(Math.abs(etap) <= MAX_ETA_PRIME)) {
+        double chp = Math.sqrt(chp2);
+        // η' = asinh(sinh η') = log1p(|x| + x²/(1 + cosh η')), sign restored.
+        double ashp = Math.abs(shp);
+        double etapAbs = Conformal.log1p(ashp + ashp * ashp / (1 + chp));
+        double etap = shp < 0 ? -etapAbs : etapAbs;
+        if (!(etapAbs <= MAX_ETA_PRIME)) {
             throw new ProjectionDomainException("point (" + latitude + "°, " + (centralMeridian + dlon)
                 + "°) is too far from the central meridian " + centralMeridian + "° for the 6th-order "
-                + "Krüger series: |η'| = " + Math.abs(etap) + " exceeds " + MAX_ETA_PRIME);
+                + "Krüger series: |η'| = " + etapAbs + " exceeds " + MAX_ETA_PRIME);
         }
         // cos 2ξ', sin 2ξ', cosh 2η', sinh 2η' from the half-angle quantities (no further transcendental).
         double c2 = (ccl * ccl - t * t) / d2;
         double s2 = 2 * t * ccl / d2;
         double ch2 = chp2 + shp * shp;
-        double sh2 = 2 * shp * Math.sqrt(chp2);
+        double sh2 = 2 * shp * chp;
         // Clenshaw, complex: ar + i·ai = 2 cos 2ζ'.
         double ar = 2 * c2 * ch2;
         double ai = -2 * s2 * sh2;
@@ -299,10 +305,11 @@ public final class TransverseMercator implements MapProjection {
             double hi = ai / 2;
             double dr = 1 - z1r + (hr * z0r - hi * z0i);
             double di = -z1i + (hr * z0i + hi * z0r);
-            double gammaP = Math.atan2(t * sl, cl * Math.sqrt(c * c + t * t));
+            // cos λ > 0 and Re(dζ/dζ') ≈ 1 > 0: plain arc tangents suffice.
+            double gammaP = Math.atan(t * sl / (cl * Math.sqrt(c * c + t * t)));
             double kP = Math.sqrt(1 - conformal.e2 * s * s) / d;
-            out[off + 2] = scale * b1 * kP * Math.hypot(dr, di);
-            out[off + 3] = DegreeTrig.toDegrees(gammaP - Math.atan2(di, dr));
+            out[off + 2] = scale * b1 * kP * Math.sqrt(dr * dr + di * di);
+            out[off + 3] = DegreeTrig.toDegrees(gammaP - Math.atan(di / dr));
         }
     }
 
