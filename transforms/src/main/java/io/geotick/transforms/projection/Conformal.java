@@ -37,10 +37,9 @@ final class Conformal {
             double u = e * x;
             double u2 = u * u;
             // atanh u = u(1 + u²/3 + u⁴/5 + …); (e·sin φ)² ≤ 0.0068, so u²⁰/21 < 1e-44 relative.
-            double p = 1.0 / 19;
-            for (int k = 17; k >= 1; k -= 2) {
-                p = p * u2 + 1.0 / k;
-            }
+            // Unrolled Horner with constant coefficients (a division per term would dominate the cost).
+            double p = ((((((((1.0 / 19 * u2 + 1.0 / 17) * u2 + 1.0 / 15) * u2 + 1.0 / 13) * u2 + 1.0 / 11)
+                * u2 + 1.0 / 9) * u2 + 1.0 / 7) * u2 + 1.0 / 5) * u2 + 1.0 / 3) * u2 + 1.0;
             return e * u * p;
         }
         double u = e * x;

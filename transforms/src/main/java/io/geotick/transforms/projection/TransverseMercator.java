@@ -261,8 +261,9 @@ public final class TransverseMercator implements MapProjection {
                 + "Krüger series: |η'| = " + etapAbs + " exceeds " + MAX_ETA_PRIME);
         }
         // cos 2ξ', sin 2ξ', cosh 2η', sinh 2η' from the half-angle quantities (no further transcendental).
-        double c2 = (ccl * ccl - t * t) / d2;
-        double s2 = 2 * t * ccl / d2;
+        double invD2 = 1 / d2;
+        double c2 = (ccl * ccl - t * t) * invD2;
+        double s2 = 2 * t * ccl * invD2;
         double ch2 = chp2 + shp * shp;
         double sh2 = 2 * shp * chp;
         // Clenshaw, complex: ar + i·ai = 2 cos 2ζ'.
@@ -305,11 +306,14 @@ public final class TransverseMercator implements MapProjection {
             double hi = ai / 2;
             double dr = 1 - z1r + (hr * z0r - hi * z0i);
             double di = -z1i + (hr * z0i + hi * z0r);
-            // cos λ > 0 and Re(dζ/dζ') ≈ 1 > 0: plain arc tangents suffice.
-            double gammaP = Math.atan(t * sl / (cl * Math.sqrt(c * c + t * t)));
+            // γ = γ' − arg(dζ/dζ') with tan γ' = p (cos λ > 0) and tan(arg) = q (Re ≈ 1 > 0); while
+            // p·q > −1/2 the difference of arc tangents is one arc tangent: atan((p − q)/(1 + pq)).
+            double p = t * sl / (cl * Math.sqrt(c * c + t * t));
+            double q = di / dr;
+            double gamma = p * q > -0.5 ? Math.atan((p - q) / (1 + p * q)) : Math.atan(p) - Math.atan(q);
             double kP = Math.sqrt(1 - conformal.e2 * s * s) / d;
             out[off + 2] = scale * b1 * kP * Math.sqrt(dr * dr + di * di);
-            out[off + 3] = DegreeTrig.toDegrees(gammaP - Math.atan(di / dr));
+            out[off + 3] = DegreeTrig.toDegrees(gamma);
         }
     }
 

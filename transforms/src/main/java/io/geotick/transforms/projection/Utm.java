@@ -236,7 +236,9 @@ public final class Utm implements MapProjection {
     @Override
     public GridPosition project(double latitude, double longitude) {
         checkPoint(latitude, longitude);
-        return tm.project(latitude, longitude);
+        double[] buf = new double[4];
+        tm.forward(latitude, longitude, buf, 0, true);
+        return new GridPosition(buf[0], buf[1], buf[2], buf[3]);
     }
 
     @Override
