@@ -9,7 +9,7 @@ import java.util.Objects;
  * Lambert Conformal Conic on the ellipsoid, with one standard parallel (EPSG method 9801) or two
  * (EPSG method 9802). Immutable and thread-safe.
  *
- * <p>Formulas (IOGP Guidance Note 7-2, §3.1.1; Snyder 1987, §15): m = cos φ/√(1 − e² sin²φ),
+ * <p>Formulas (IOGP Guidance Note 7-2; Snyder 1987, §15): m = cos φ/√(1 − e² sin²φ),
  * t = tan(π/4 − φ/2)/((1 − e sin φ)/(1 + e sin φ))^{e/2} (computed as exp(−ψ), ψ the isometric latitude,
  * through the conformal latitude, without cancellation in either hemisphere);
  * <ul>

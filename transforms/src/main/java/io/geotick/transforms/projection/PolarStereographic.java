@@ -9,7 +9,7 @@ import java.util.Objects;
  * Polar stereographic, variant A (EPSG method 9810): the ellipsoidal polar stereographic with the
  * latitude of origin at a pole and a scale factor k₀ there. Immutable and thread-safe.
  *
- * <p>Formulas (IOGP Guidance Note 7-2, §3.2.2; Snyder 1987, §21): for the north pole,
+ * <p>Formulas (IOGP Guidance Note 7-2; Snyder 1987, §21): for the north pole,
  * t = tan(π/4 − φ/2)·((1 + e sin φ)/(1 − e sin φ))^{e/2}, ρ = 2ak₀t/√((1 + e)^{1+e}(1 − e)^{1−e}),
  * E = FE + ρ sin(λ − λ₀), N = FN − ρ cos(λ − λ₀); for the south pole φ → −φ in t and
  * N = FN + ρ cos(λ − λ₀). Here t is computed as tan(π/4 − χ/2) from the conformal latitude χ

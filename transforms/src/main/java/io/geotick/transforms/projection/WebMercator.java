@@ -11,7 +11,7 @@ import java.util.Objects;
  * spherical Mercator formulas applied to geodetic latitude and longitude with the ellipsoid's semi-major
  * axis a as the sphere's radius. Immutable and thread-safe.
  *
- * <p>Formulas (IOGP Guidance Note 7-2, §3.3.3): E = FE + a(λ − λ₀), N = FN + a·ln tan(π/4 + φ/2)
+ * <p>Formulas (IOGP Guidance Note 7-2): E = FE + a(λ − λ₀), N = FN + a·ln tan(π/4 + φ/2)
  * (= a·atanh(sin φ), computed as ln((1 + |sin φ|)/cos φ) with the sign of φ); inverse
  * φ = atan(sinh((N − FN)/a)), λ = λ₀ + (E − FE)/a.
  *

@@ -17,7 +17,7 @@ import org.junit.jupiter.params.provider.MethodSource;
  * agree with the single-point ones (also in place), and the reported scale and convergence agree with
  * numerical differentiation of the forward mapping (central differences).
  *
- * <p>Source of the scale/convergence definitions: IOGP Guidance Note 7-2 §1.3 and Snyder (1987) §4
+ * <p>Source of the scale/convergence definitions: IOGP Guidance Note 7-2 and Snyder (1987) §4
  * (common practice): k = |d(E, N)|/ds along a meridian (M dφ) or a parallel (ν cos φ dλ); γ is the
  * angle from true north to grid north, clockwise, so the meridian's grid direction is rotated by −γ.
  */
@@ -129,7 +129,7 @@ class ProjectionPropertiesTest {
     @ParameterizedTest
     @MethodSource("cases")
     void scaleAndConvergenceMatchNumericalDerivatives(Case c) {
-        // Source: IOGP Guidance Note 7-2 §1.3 / Snyder (1987) §4 definitions of point scale and convergence;
+        // Source: IOGP Guidance Note 7-2 / Snyder (1987) §4 definitions of point scale and convergence;
         // central differences with a step of 1e-4° (truncation ~1e-12 relative, rounding ~1e-10).
         Ellipsoid el = c.projection.ellipsoid();
         double h = 1e-4;

@@ -11,7 +11,7 @@ class WebMercatorConformalityTest {
 
     @Test
     void meridianAndParallelScalesDifferBy0point674PercentAtTheEquator() {
-        // Source: IOGP Guidance Note 7-2 §3.3.3 remark (the method is not conformal) and the ratio
+        // Source: IOGP Guidance Note 7-2 remark (the method is not conformal) and the ratio
         // h/k = ν/M = (1 − e² sin²φ)/(1 − e²), whose maximum e'² = 0.0067395 for WGS 84 (NGA.STND.0036).
         WebMercator w = WebMercator.wgs84();
         double ratio = w.meridianScale(0) / w.parallelScale(0);
