@@ -306,13 +306,16 @@ public final class TransverseMercator implements MapProjection {
             double hi = ai / 2;
             double dr = 1 - z1r + (hr * z0r - hi * z0i);
             double di = -z1i + (hr * z0i + hi * z0r);
-            // γ = γ' − arg(dζ/dζ') with tan γ' = p (cos λ > 0) and tan(arg) = q (Re ≈ 1 > 0); while
-            // p·q > −1/2 the difference of arc tangents is one arc tangent: atan((p − q)/(1 + pq)).
-            double p = t * sl / (cl * Math.sqrt(c * c + t * t));
-            double q = di / dr;
-            double gamma = p * q > -0.5 ? Math.atan((p - q) / (1 + p * q)) : Math.atan(p) - Math.atan(q);
-            double kP = Math.sqrt(1 - conformal.e2 * s * s) / d;
-            out[off + 2] = scale * b1 * kP * Math.sqrt(dr * dr + di * di);
+            // γ = γ' − arg(dζ/dζ') = arg((Q + iP)·conj(dζ/dζ')) with tan γ' = P/Q, Q = cos λ·√(cos²φ + T²) > 0;
+            // the real part of that product is positive in practice (Re dζ/dζ' ≈ 1, |γ| < 90°), where
+            // the argument is a plain arc tangent (cheaper than atan2).
+            double bigP = t * sl;
+            double bigQ = cl * Math.sqrt(c * c + t * t);
+            double re = bigQ * dr + bigP * di;
+            double im = bigP * dr - bigQ * di;
+            double gamma = re > 0 ? Math.atan(im / re) : Math.atan2(im, re);
+            // k = k₀(A/a)·√(1 − e² sin²φ)/D·|dζ/dζ'|, one square root.
+            out[off + 2] = scale * b1 * Math.sqrt((1 - conformal.e2 * s * s) * (dr * dr + di * di)) / d;
             out[off + 3] = DegreeTrig.toDegrees(gamma);
         }
     }
