@@ -95,24 +95,34 @@ class IogpWorkedExamplesTest {
     }
 
     @Test
-    void polarStereographicVariantASouth() {
-        // Source: IOGP Guidance Note 7-2, Polar Stereographic (variant A) worked example (WGS 84,
-        // φ0 90°S, λ0 0°, k0 0.994, FE = FN = 2000000 m): 73°S 44°E → E 3320416.75 m, N 632668.43 m
-        // (values from memory).
+    void polarStereographicVariantANorth() {
+        // Source: IOGP Guidance Note 7-2, Polar Stereographic (variant A) worked example, WGS 84 / UPS North
+        // (φ0 90°N, λ0 0°, k0 0.994, FE = FN = 2000000 m): 73°N 44°E → E 3320416.75 m, N 632668.43 m
+        // (values from memory). An earlier reading of this example at 73°S gave the mirror-image northing;
+        // the example is the north-pole one, where N = FN − ρ cos(λ − λ0).
+        PolarStereographic ps = PolarStereographic.variantA(Ellipsoids.WGS84, Hemisphere.NORTH, 0, 0.994,
+            2000000, 2000000);
+        GridPosition g = ps.project(73, 44);
+        assertThat(g.easting()).isCloseTo(3320416.75, within(0.005));
+        assertThat(g.northing()).isCloseTo(632668.43, within(0.005));
+        GeodeticPosition back = ps.unproject(3320416.75, 632668.43);
+        assertThat(back.latitude()).isCloseTo(73, within(5e-8));
+        assertThat(back.longitude()).isCloseTo(44, within(5e-8));
+    }
+
+    @Test
+    void polarStereographicVariantASouthAgainstProj4j() {
+        // Source: the south-pole mirror of the IOGP example (N = FN + ρ cos(λ − λ0), EPSG method 9810,
+        // common practice), checked against Proj4J 1.4.1's EPSG:32761 (WGS 84 / UPS South) as a reference
+        // library.
         PolarStereographic ps = PolarStereographic.variantA(Ellipsoids.WGS84, Hemisphere.SOUTH, 0, 0.994,
             2000000, 2000000);
         GridPosition g = ps.project(-73, 44);
         assertThat(g.easting()).isCloseTo(3320416.75, within(0.005));
-        // Disagreement stated: the recalled N is the mirror image about FN of ours (2000000 − 1367331.57
-        // against 2000000 + 1367331.57): the distance from the pole agrees to the centimetre, the side does
-        // not. Re-checked: the variant A south-pole formula N = FN + ρ cos(λ − λ0) puts the 0° meridian
-        // toward grid north, as UPS South does, and Proj4J's EPSG:32761 (same parameters) gives our value.
-        // So the recalled sign is taken to be wrong; both facts are checked here.
-        assertThat(Math.abs(g.northing() - 2000000)).isCloseTo(2000000 - 632668.43, within(0.005));
+        assertThat(g.northing()).isCloseTo(2000000 + (2000000 - 632668.43), within(0.005));
         ProjCoordinate theirs = new ProjCoordinate();
         new CRSFactory().createFromName("EPSG:32761").getProjection()
             .project(new ProjCoordinate(44, -73), theirs);
-        // Source: Proj4J 1.4.1, EPSG:32761 (WGS 84 / UPS South) as a reference library.
         assertThat(g.northing()).isCloseTo(theirs.y, within(1e-6));
         GeodeticPosition back = ps.unproject(g);
         assertThat(back.latitude()).isCloseTo(-73, within(1e-12));
