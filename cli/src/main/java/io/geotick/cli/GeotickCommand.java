@@ -2,6 +2,7 @@ package io.geotick.cli;
 
 import io.geotick.cli.coord.CoordCommand;
 import io.geotick.cli.demo.DemoCommand;
+import io.geotick.cli.frames.FramesCommand;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.ParameterException;
@@ -18,6 +19,7 @@ import picocli.CommandLine.Spec;
         "  5 batch finished with error rows."},
     subcommands = {
         CoordCommand.class,
+        FramesCommand.class,
         DemoCommand.class,
     })
 public final class GeotickCommand implements Runnable {
