@@ -24,7 +24,8 @@ public final class DemoCommand implements Callable<Integer> {
      */
     static List<DemoPart> parts() {
         return List.of(
-            new GeodesyDemo());
+            new GeodesyDemo(),
+            new DatumDemo());
     }
 
     @Override
