@@ -138,6 +138,18 @@ public final class Conversion {
             ExplainedStep.total(all), warnings);
     }
 
+    /**
+     * Refuses a geoid grid when neither system has orthometric heights (so the file need not be read).
+     *
+     * @throws UserInputException naming both systems
+     */
+    public static void checkGeoidUse(CoordinateSystemSpec source, CoordinateSystemSpec target) {
+        if (source.kind() != SystemKind.GEODETIC_ORTHOMETRIC && target.kind() != SystemKind.GEODETIC_ORTHOMETRIC) {
+            throw new UserInputException("--geoid is used only with a geodetic-orthometric system, and neither '"
+                + source + "' nor '" + target + "' is one");
+        }
+    }
+
     /** The user's own Helmert transformation and its stated accuracy (empty if not stated). */
     public record UserHelmert(Helmert helmert, OptionalDouble accuracyMetres) {
         public UserHelmert {
@@ -199,11 +211,8 @@ public final class Conversion {
          * @throws io.geotick.transforms.frames.NoFramePathException if no path joins the frames at the epoch
          */
         public Conversion build() {
-            boolean orthometric = source.kind() == SystemKind.GEODETIC_ORTHOMETRIC
-                || target.kind() == SystemKind.GEODETIC_ORTHOMETRIC;
-            if (geoid.isPresent() && !orthometric) {
-                throw new UserInputException("--geoid is used only with a geodetic-orthometric system, and neither '"
-                    + source + "' nor '" + target + "' is one");
+            if (geoid.isPresent()) {
+                checkGeoidUse(source, target);
             }
             boolean sf = source.frame().isPresent();
             boolean tf = target.frame().isPresent();

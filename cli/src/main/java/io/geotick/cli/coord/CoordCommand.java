@@ -52,7 +52,7 @@ import picocli.CommandLine.Spec;
         "                  latitude, longitude (deg), orthometric height H = h - N (m)",
         "                  above the geoid of --geoid",
         "",
-        "Frames: append @FRAME to a system, e.g. ecef@ITRF2020, geodetic@ETRF2000,",
+        "Frames (SYS@FRAME): append @FRAME to a system, e.g. ecef@ITRF2020, geodetic@ETRF2000,",
         "geodetic@OSGB36, enu:52,-1,80@OSGB36 (the origin is then in that frame).",
         "'geotick frames' lists the frames and the published parameter sets between",
         "them. Give a frame at both ends or at neither:",
@@ -168,6 +168,7 @@ public final class CoordCommand implements Callable<Integer> {
         }
         userHelmert().ifPresent(b::helmert);
         if (geoid != null) {
+            Conversion.checkGeoidUse(source, target);
             b.geoid(GeoidGrid.read(geoid));
         }
         ConvertedPoint result = b.build().convert(values);
