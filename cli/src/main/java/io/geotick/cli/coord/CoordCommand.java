@@ -164,7 +164,7 @@ public final class CoordCommand implements Callable<Integer> {
             b.ellipsoid(Ellipsoids.byName(ellipsoid));
         }
         if (epoch != null) {
-            b.epoch(Epoch.parse(epoch));
+            b.epoch(epoch(epoch));
         }
         userHelmert().ifPresent(b::helmert);
         if (geoid != null) {
@@ -184,6 +184,19 @@ public final class CoordCommand implements Callable<Integer> {
         }
         out.flush();
         return ExitCode.OK;
+    }
+
+    /** The coordinate epoch; a number outside the supported range is named as such, not as unreadable. */
+    static Epoch epoch(String text) {
+        try {
+            return Epoch.parse(text);
+        } catch (IllegalArgumentException e) {
+            Throwable c = e.getCause();
+            if (c instanceof IllegalArgumentException && !(c instanceof NumberFormatException)) {
+                throw new UserInputException("--epoch '" + text + "': " + c.getMessage(), e);
+            }
+            throw new UserInputException("--epoch: " + e.getMessage(), e);
+        }
     }
 
     private java.util.Optional<Conversion.UserHelmert> userHelmert() {

@@ -322,7 +322,11 @@ class CoordFramesTest {
         a.add(Arguments.of(with(args("--from", "ecef@ITRF2020", "--to", "ecef@WGS84", "--epoch", "1999.0"), p),
             "no chain of parameter sets joins ITRF2020 and WGS 84 for coordinates at epoch 1999.0"));
         a.add(Arguments.of(with(args("--from", "ecef@ITRF2020", "--to", "ecef@ETRF2000", "--epoch", "yesterday"), p),
-            "epoch 'yesterday'"));
+            "--epoch: epoch 'yesterday' is neither a decimal year"));
+        a.add(Arguments.of(with(args("--from", "ecef@ITRF2020", "--to", "ecef@ETRF2000", "--epoch", "1700"), p),
+            "--epoch '1700': epoch 1700.0 is not a decimal year in [1800, 2200]"));
+        a.add(Arguments.of(with(args("--from", "ecef@ITRF2020", "--to", "ecef@ETRF2000", "--epoch", "2024-02-30"), p),
+            "epoch '2024-02-30'"));
         a.add(Arguments.of(with(args("--from", "ecef@ITRF2020", "--to", "geodetic"), p),
             "'ecef@ITRF2020' names a frame but 'geodetic' does not"));
         a.add(Arguments.of(with(args("--from", "geodetic@ETRF2000", "--to", "ecef@ETRF2000", "--ellipsoid", "WGS 84"),
