@@ -2,6 +2,7 @@ package io.geotick.cli;
 
 import io.geotick.cli.coord.CoordCommand;
 import io.geotick.cli.demo.DemoCommand;
+import io.geotick.cli.frames.FramesCommand;
 import io.geotick.cli.time.ClockCommand;
 import io.geotick.cli.time.LeapCommand;
 import io.geotick.cli.time.TimeCommand;
@@ -21,10 +22,11 @@ import picocli.CommandLine.Spec;
         "  5 batch finished with error rows."},
     subcommands = {
         CoordCommand.class,
-        DemoCommand.class,
+        FramesCommand.class,
         TimeCommand.class,
         LeapCommand.class,
         ClockCommand.class,
+        DemoCommand.class,
     })
 public final class GeotickCommand implements Runnable {
     @Spec

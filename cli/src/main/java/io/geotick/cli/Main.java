@@ -87,5 +87,6 @@ public final class Main {
     /** Exception types meaning "a data file was read but is invalid"; modules add theirs here. */
     private static final List<Class<? extends Throwable>> DATA_FILE_FAILURES = List.of(
         DataFileException.class,
-        io.geotick.timescales.leap.LeapListException.class);
+        io.geotick.timescales.leap.LeapListException.class,
+        io.geotick.transforms.grid.GridFormatException.class);
 }

@@ -1,10 +1,27 @@
 package io.geotick.cli.coord;
 
+import io.geotick.cli.UserInputException;
 import io.geotick.geodesy.ellipsoid.Ellipsoid;
+import io.geotick.geodesy.ellipsoid.Ellipsoids;
 import io.geotick.geodesy.position.EcefPosition;
+import io.geotick.transforms.Epoch;
+import io.geotick.transforms.MissingEpochException;
+import io.geotick.transforms.StepDescription;
+import io.geotick.transforms.chain.ConversionChain;
+import io.geotick.transforms.chain.CoordinateSystem;
+import io.geotick.transforms.frames.Frame;
+import io.geotick.transforms.frames.FrameKind;
+import io.geotick.transforms.frames.FrameLink;
+import io.geotick.transforms.frames.FrameRegistry;
+import io.geotick.transforms.height.GeoidGrid;
+import io.geotick.transforms.helmert.Helmert;
 import java.util.ArrayList;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.Set;
 
 /**
  * Converts points from one coordinate system to another through ECEF:
@@ -14,35 +31,56 @@ import java.util.Objects;
  * ECEF round trip adds at most a few nanometres (the geodesy module's stated bounds: the forward
  * conversions are exact to a few ulps, the ECEF → geodetic inverse is within 1 nm).
  *
- * <p>FRAME PLUG-IN POINT: {@link #steps} is where frame changes and grid shifts go (see {@link EcefStep});
- * today it is empty.
+ * <h2>Frames</h2>
+ * <ul>
+ *   <li>Neither system names a frame: a purely geometric conversion, both ends on {@code --ellipsoid}
+ *       (default WGS 84); no step between the ECEF positions.</li>
+ *   <li>Both name a frame ({@code SYS@FRAME}): each end uses its frame's ellipsoid (an explicit
+ *       {@code --ellipsoid} must be that ellipsoid), and the step between the ECEF positions is the
+ *       transforms library's {@link ConversionChain} from {@code ecef@SOURCE} to {@code ecef@TARGET} at the
+ *       coordinate epoch: the registry's path, whose time-dependent steps need {@code --epoch}.</li>
+ *   <li>Only one names a frame: refused, since "the same frame" and "WGS 84" would both be plausible
+ *       readings of the bare end.</li>
+ *   <li>User Helmert parameters ({@code --helmert}) replace the registry path between two named frames;
+ *       without frames they apply between the two ECEF positions on the bare {@code --ellipsoid}.</li>
+ * </ul>
  */
 public final class Conversion {
     private final CoordinateSystemSpec source;
     private final CoordinateSystemSpec target;
-    private final Ellipsoid ellipsoid;
+    private final Ellipsoid targetEllipsoid;
     private final SystemAdapter from;
     private final SystemAdapter to;
     private final List<EcefStep> steps;
+    private final Optional<Epoch> epoch;
+    private final List<String> warnings;
 
-    private Conversion(CoordinateSystemSpec source, CoordinateSystemSpec target, Ellipsoid ellipsoid,
-        List<EcefStep> steps) {
+    private Conversion(CoordinateSystemSpec source, CoordinateSystemSpec target, SystemAdapter from,
+            SystemAdapter to, Ellipsoid targetEllipsoid, List<EcefStep> steps, Optional<Epoch> epoch,
+            List<String> warnings) {
         this.source = source;
         this.target = target;
-        this.ellipsoid = ellipsoid;
-        this.from = SystemAdapter.of(source, ellipsoid);
-        this.to = SystemAdapter.of(target, ellipsoid);
+        this.from = from;
+        this.to = to;
+        this.targetEllipsoid = targetEllipsoid;
         this.steps = List.copyOf(steps);
+        this.epoch = epoch;
+        this.warnings = List.copyOf(warnings);
     }
 
     /**
-     * The conversion between two systems on one ellipsoid (local-frame origins are on it too).
+     * The geometric conversion between two systems without frames on one ellipsoid (local-frame origins are
+     * on it too).
      *
      * @throws io.geotick.geodesy.InvalidCoordinateException if a local origin is unusable
      */
     public static Conversion of(CoordinateSystemSpec source, CoordinateSystemSpec target, Ellipsoid ellipsoid) {
-        return new Conversion(Objects.requireNonNull(source, "source"), Objects.requireNonNull(target, "target"),
-            Objects.requireNonNull(ellipsoid, "ellipsoid"), new ArrayList<>());
+        return builder(source, target).ellipsoid(ellipsoid).build();
+    }
+
+    /** A builder for the conversion from {@code source} to {@code target}. */
+    public static Builder builder(CoordinateSystemSpec source, CoordinateSystemSpec target) {
+        return new Builder(Objects.requireNonNull(source, "source"), Objects.requireNonNull(target, "target"));
     }
 
     public CoordinateSystemSpec source() {
@@ -53,14 +91,29 @@ public final class Conversion {
         return target;
     }
 
+    /** The ellipsoid of the target values. */
     public Ellipsoid ellipsoid() {
-        return ellipsoid;
+        return targetEllipsoid;
+    }
+
+    /** Every step, in order: source → ECEF, the frame steps, ECEF → target. */
+    public List<ExplainedStep> steps() {
+        List<ExplainedStep> all = new ArrayList<>();
+        from.toEcefSteps().forEach(d -> all.add(ExplainedStep.of(d)));
+        steps.forEach(s -> all.addAll(s.steps()));
+        to.fromEcefSteps().forEach(d -> all.add(ExplainedStep.of(d)));
+        return all;
+    }
+
+    /** The cautions of the published parameter sets used, each with its size. */
+    public List<String> warnings() {
+        return warnings;
     }
 
     /**
      * Converts one point given as typed: exactly three values in the source's axis order.
      *
-     * @throws io.geotick.cli.UserInputException if the count is wrong or a value is not a number
+     * @throws UserInputException if the count is wrong or a value is not a number
      * @throws io.geotick.geodesy.InvalidCoordinateException if a value is out of range, or the point has
      *     no value in the target (inside the Earth's evolute, for geodetic)
      */
@@ -80,6 +133,187 @@ public final class Conversion {
         for (int i = 0; i < axes.size(); i++) {
             fields.add(new OutputField(axes.get(i), out[i]));
         }
-        return new ConvertedPoint(target, ellipsoid.name(), fields);
+        List<ExplainedStep> all = steps();
+        return new ConvertedPoint(source, target, targetEllipsoid.name(), epoch, fields, all,
+            ExplainedStep.total(all), warnings);
+    }
+
+    /**
+     * Refuses a geoid grid when neither system has orthometric heights (so the file need not be read).
+     *
+     * @throws UserInputException naming both systems
+     */
+    public static void checkGeoidUse(CoordinateSystemSpec source, CoordinateSystemSpec target) {
+        if (source.kind() != SystemKind.GEODETIC_ORTHOMETRIC && target.kind() != SystemKind.GEODETIC_ORTHOMETRIC) {
+            throw new UserInputException("--geoid is used only with a geodetic-orthometric system, and neither '"
+                + source + "' nor '" + target + "' is one");
+        }
+    }
+
+    /** The user's own Helmert transformation and its stated accuracy (empty if not stated). */
+    public record UserHelmert(Helmert helmert, OptionalDouble accuracyMetres) {
+        public UserHelmert {
+            Objects.requireNonNull(helmert, "helmert");
+            Objects.requireNonNull(accuracyMetres, "accuracyMetres");
+        }
+    }
+
+    /** Collects the options of a conversion; {@link #build()} checks that they fit together. */
+    public static final class Builder {
+        private final CoordinateSystemSpec source;
+        private final CoordinateSystemSpec target;
+        private FrameRegistry registry = FrameRegistry.standard();
+        private Optional<Ellipsoid> ellipsoid = Optional.empty();
+        private Optional<Epoch> epoch = Optional.empty();
+        private Optional<UserHelmert> helmert = Optional.empty();
+        private Optional<GeoidGrid> geoid = Optional.empty();
+
+        private Builder(CoordinateSystemSpec source, CoordinateSystemSpec target) {
+            this.source = source;
+            this.target = target;
+        }
+
+        /** The registry whose paths join the frames (default: the standard one). */
+        public Builder registry(FrameRegistry r) {
+            this.registry = Objects.requireNonNull(r, "registry");
+            return this;
+        }
+
+        /** The ellipsoid asked for with {@code --ellipsoid}. */
+        public Builder ellipsoid(Ellipsoid e) {
+            this.ellipsoid = Optional.of(e);
+            return this;
+        }
+
+        /** The coordinate epoch ({@code --epoch}). */
+        public Builder epoch(Epoch e) {
+            this.epoch = Optional.of(e);
+            return this;
+        }
+
+        /** The user's own Helmert parameters ({@code --helmert}, {@code --convention}). */
+        public Builder helmert(UserHelmert h) {
+            this.helmert = Optional.of(h);
+            return this;
+        }
+
+        /** The geoid grid for orthometric heights ({@code --geoid}). */
+        public Builder geoid(GeoidGrid g) {
+            this.geoid = Optional.of(g);
+            return this;
+        }
+
+        /**
+         * The conversion.
+         *
+         * @throws UserInputException for options that do not fit together, naming them, and for a
+         *     time-dependent step without an epoch (the library's message, naming the step)
+         * @throws io.geotick.transforms.frames.NoFramePathException if no path joins the frames at the epoch
+         */
+        public Conversion build() {
+            if (geoid.isPresent()) {
+                checkGeoidUse(source, target);
+            }
+            boolean sf = source.frame().isPresent();
+            boolean tf = target.frame().isPresent();
+            if (sf != tf) {
+                CoordinateSystemSpec with = sf ? source : target;
+                CoordinateSystemSpec without = sf ? target : source;
+                throw new UserInputException("'" + with + "' names a frame but '" + without + "' does not; give a"
+                    + " frame at both ends (e.g. " + without + "@" + with.frame().orElseThrow().name()
+                    + " for the same frame) or at neither");
+            }
+            return sf ? betweenFrames(source.frame().orElseThrow(), target.frame().orElseThrow()) : geometric();
+        }
+
+        private Conversion geometric() {
+            Ellipsoid e = ellipsoid.orElse(Ellipsoids.WGS84);
+            List<EcefStep> steps = new ArrayList<>();
+            if (helmert.isPresent()) {
+                // The chain needs frames: two unnamed ones on the one ellipsoid, joined only by the user's set.
+                Frame s = Frame.of("source frame", FrameKind.STATIC, e, 0, "the source system, no frame named");
+                Frame t = Frame.of("target frame", FrameKind.STATIC, e, 0, "the target system, no frame named");
+                steps.add(chainStep(s, t));
+            }
+            return new Conversion(source, target, SystemAdapter.of(source, e, "--ellipsoid", geoid),
+                SystemAdapter.of(target, e, "--ellipsoid", geoid), e, steps, epoch, List.of());
+        }
+
+        private Conversion betweenFrames(Frame s, Frame t) {
+            for (Frame f : List.of(s, t)) {
+                if (ellipsoid.isPresent() && !ellipsoid.get().equals(f.ellipsoid())) {
+                    throw new UserInputException("--ellipsoid '" + ellipsoid.get().name() + "' is not the ellipsoid"
+                        + " of frame " + f.name() + " (" + f.ellipsoid().name() + "); a frame implies its ellipsoid:"
+                        + " leave --ellipsoid out");
+                }
+            }
+            if (helmert.isPresent() && s.equals(t)) {
+                throw new UserInputException("--helmert between " + s.name() + " and itself: name the frame your"
+                    + " parameters start from in --from and the one they lead to in --to");
+            }
+            List<EcefStep> steps = new ArrayList<>();
+            ChainStep c = chainStep(s, t);
+            if (!c.steps().isEmpty()) {
+                steps.add(c);
+            }
+            return new Conversion(source, target, SystemAdapter.of(source, s.ellipsoid(), s.name(), geoid),
+                SystemAdapter.of(target, t.ellipsoid(), t.name(), geoid), t.ellipsoid(), steps, epoch,
+                warnings(c.chain));
+        }
+
+        private ChainStep chainStep(Frame s, Frame t) {
+            ConversionChain.Builder b = ConversionChain.builder().registry(registry)
+                .from(CoordinateSystem.ecef(s)).to(CoordinateSystem.ecef(t));
+            epoch.ifPresent(b::epoch);
+            helmert.ifPresent(h -> b.helmert(h.helmert(), "your own parameters (--helmert"
+                + (h.accuracyMetres().isPresent() ? ", accuracy from --helmert-accuracy)"
+                : "); accuracy not stated (give --helmert-accuracy)"), h.accuracyMetres().orElse(0)));
+            try {
+                return new ChainStep(b.build(), helmert.map(UserHelmert::accuracyMetres).orElse(OptionalDouble.empty()),
+                    helmert.isPresent());
+            } catch (MissingEpochException e) {
+                throw new UserInputException(e.getMessage() + " (give --epoch DECIMAL_YEAR or --epoch YYYY-MM-DD)", e);
+            }
+        }
+
+        /** The cautions of the registry's published sets along the path (WGS 84 ≈ ITRF, regional means …). */
+        private List<String> warnings(ConversionChain chain) {
+            Set<String> w = new LinkedHashSet<>();
+            for (StepDescription d : chain.steps()) {
+                for (FrameLink l : registry.links()) {
+                    if (d.name().equals(l.from() + " → " + l.to()) || d.name().equals(l.to() + " → " + l.from())) {
+                        w.addAll(l.cautions());
+                    }
+                }
+            }
+            return new ArrayList<>(w);
+        }
+    }
+
+    /** The frame change as a transforms-library chain between two ECEF systems. */
+    private static final class ChainStep implements EcefStep {
+        private final ConversionChain chain;
+        private final List<ExplainedStep> listed;
+
+        ChainStep(ConversionChain chain, OptionalDouble userAccuracy, boolean user) {
+            this.chain = chain;
+            List<ExplainedStep> l = new ArrayList<>();
+            for (StepDescription d : chain.steps()) {
+                // The user's set is the chain's only step; its accuracy is what they stated, if anything.
+                l.add(user ? new ExplainedStep(d, userAccuracy) : ExplainedStep.of(d));
+            }
+            this.listed = List.copyOf(l);
+        }
+
+        @Override
+        public EcefPosition apply(EcefPosition p) {
+            double[] r = chain.convert(p.x(), p.y(), p.z());
+            return EcefPosition.of(r[0], r[1], r[2]);
+        }
+
+        @Override
+        public List<ExplainedStep> steps() {
+            return listed;
+        }
     }
 }

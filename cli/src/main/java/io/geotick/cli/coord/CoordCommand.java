@@ -2,11 +2,18 @@ package io.geotick.cli.coord;
 
 import io.geotick.cli.Cautions;
 import io.geotick.cli.ExitCode;
-import io.geotick.geodesy.ellipsoid.Ellipsoid;
+import io.geotick.cli.UserInputException;
 import io.geotick.geodesy.ellipsoid.Ellipsoids;
+import io.geotick.transforms.Epoch;
+import io.geotick.transforms.height.GeoidGrid;
+import io.geotick.transforms.helmert.Helmert;
+import io.geotick.transforms.helmert.HelmertParameters;
+import io.geotick.transforms.helmert.RotationConvention;
 import java.io.PrintWriter;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -18,17 +25,19 @@ import picocli.CommandLine.Spec;
  * {@code geotick coord}: converts one point between coordinate systems.
  *
  * <p>The work is split so that each part can grow on its own: {@link SystemSpecParser} reads the SYS
- * texts into {@link CoordinateSystemSpec}s, {@link Conversion} takes the point through ECEF (with room for
- * frame and grid steps), and {@link TextOutput} and {@link JsonOutput} render the same
- * {@link ConvertedPoint}. Bad input surfaces as an {@link IllegalArgumentException} whose message names the
+ * texts into {@link CoordinateSystemSpec}s (with their frames), {@link Conversion} takes the point through
+ * ECEF and the frame steps of the transforms library, and {@link TextOutput}, {@link JsonOutput} and
+ * {@link StepListing} render the same {@link ConvertedPoint}. Bad input surfaces as an {@link IllegalArgumentException} whose message names the
  * value; {@link io.geotick.cli.Main} turns it into one line and exit code 2.
  */
 @Command(name = "coord",
     mixinStandardHelpOptions = true,
     sortOptions = false,
-    customSynopsis = "geotick coord --from SYS --to SYS [--ellipsoid NAME] [--json] [--] V1 V2 V3",
+    customSynopsis = {"geotick coord --from SYS --to SYS [--ellipsoid NAME] [--epoch EPOCH]",
+        "      [--helmert TX,TY,TZ,RX,RY,RZ,DS --convention CONV [--helmert-accuracy M]]",
+        "      [--geoid FILE.isg] [--explain] [--json] [--] V1 V2 V3"},
     description = {
-        "Convert one point between coordinate systems.",
+        "Convert one point between coordinate systems and reference frames.",
         "",
         "Systems (SYS) and their values V1 V2 V3, typed and printed in this order:",
         "  geodetic        latitude (deg, north positive), longitude (deg, east",
@@ -39,6 +48,19 @@ import picocli.CommandLine.Spec;
         "  ned:LAT,LON,H   north, east, down (m) about the same kind of origin",
         "  aer:LAT,LON,H   azimuth (deg clockwise from north, 0 to below 360),",
         "                  elevation (deg), slant range (m) seen from the origin",
+        "  geodetic-orthometric",
+        "                  latitude, longitude (deg), orthometric height H = h - N (m)",
+        "                  above the geoid of --geoid",
+        "",
+        "Frames (SYS@FRAME): append @FRAME to a system, e.g. ecef@ITRF2020, geodetic@ETRF2000,",
+        "geodetic@OSGB36, enu:52,-1,80@OSGB36 (the origin is then in that frame).",
+        "'geotick frames' lists the frames and the published parameter sets between",
+        "them. Give a frame at both ends or at neither:",
+        "  * neither: a purely geometric conversion on --ellipsoid (default WGS 84);",
+        "  * both: each end on its frame's ellipsoid (--ellipsoid, if given, must be",
+        "    that ellipsoid) and the registry's path between the frames, evaluated",
+        "    at --epoch. Time-dependent steps (ITRF to ITRF, ITRF to ETRF2000,",
+        "    WGS 84 to ITRF by date) refuse to run without --epoch: no default.",
         "",
         "Angles are decimal degrees. Negative values may follow the options directly",
         "or after '--', which ends the options.",
@@ -48,33 +70,84 @@ import picocli.CommandLine.Spec;
     footer = {
         "",
         "Output: one 'label value unit' line per value, after 'system' and 'ellipsoid'",
-        "lines. Text rounds angles to 1e-11 deg and lengths to 1e-6 m (both about 1 um);",
+        "lines (and an 'epoch' line when given); one 'warning' line per caution of the",
+        "parameter sets used. Text rounds angles to 1e-11 deg and lengths to 1e-6 m",
+        "(both about 1 um). --explain then lists every step: method with EPSG codes,",
+        "parameters with units at the epoch, source, accuracy, cautions.",
         "--json prints one object with the values as top-level numbers at full double",
-        "precision: lat, lon, h | x, y, z | e, n, u | n, e, d | az, el, range, plus",
-        "\"system\" and \"ellipsoid\".",
+        "precision: lat, lon, h | lat, lon, H | x, y, z | e, n, u | n, e, d |",
+        "az, el, range, plus \"system\", \"ellipsoid\", \"from\", \"to\", \"epoch\"",
+        "(decimal year or null), \"warnings\" (when there are any) and, with --explain,",
+        "\"steps\" and \"accuracy_m\".",
         "",
         "Examples (invented points):",
         "  geotick coord --from geodetic --to ecef -12.3456 130.9876 25",
         "  geotick coord --from ecef --to aer:-12.3456,130.9876,25 --json \\",
         "      -- -4088131.4 4702626.4 -1357035.1",
+        "  geotick coord --from ecef@ITRF2020 --to geodetic@ETRF2000 \\",
+        "      --epoch 2026-03-15 --explain 4027894.006 307045.600 4919474.910",
+        "  geotick coord --from ecef@WGS72 --to ecef@WGS84 --convention position-vector \\",
+        "      --helmert 0,0,4.5,0,0,0.554,0.219 3657660.66 255768.55 5201382.11",
         "",
-        "Exit codes: 0 ok; 2 bad usage or input (the message names the value).",
+        "WGS 84 is taken as the ITRF realisation it was aligned to at the coordinate",
+        "epoch: about 0.1 m agreement for G1150 (2002-2012), 1-2 cm from G1762 on, as",
+        "the registry states; positions from broadcast orbits are only good to ~1 m.",
+        "Survey, cadastral and legal work defers to the local geodetic authority and",
+        "licensed surveyors: use their published parameters (--helmert) and grids.",
+        "",
+        "Exit codes: 0 ok; 2 bad usage or input (the message names the value);",
+        "  3 file not readable; 4 invalid geoid file.",
         "",
         Cautions.TEXT})
 public final class CoordCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--from", required = true, paramLabel = "SYS", description = "System of the input values.")
+    @Option(names = "--from", required = true, paramLabel = "SYS",
+        description = "System of the input values, optionally @FRAME.")
     String from;
 
-    @Option(names = "--to", required = true, paramLabel = "SYS", description = "System of the output values.")
+    @Option(names = "--to", required = true, paramLabel = "SYS",
+        description = "System of the output values, optionally @FRAME.")
     String to;
 
-    @Option(names = "--ellipsoid", paramLabel = "NAME", defaultValue = "WGS 84",
-        description = "Ellipsoid of geodetic values and local origins, by name or EPSG code "
-            + "(e.g. 'GRS 1980', EPSG:7004); an unknown name lists the known ones. Default: ${DEFAULT-VALUE}.")
+    @Option(names = "--ellipsoid", paramLabel = "NAME",
+        description = "Ellipsoid of geodetic values and local origins when no frame is named, by name or EPSG "
+            + "code (e.g. 'GRS 1980', EPSG:7004); an unknown name lists the known ones. Default: WGS 84. "
+            + "With frames, each frame's own ellipsoid is used and this option must match it.")
     String ellipsoid;
+
+    @Option(names = "--epoch", paramLabel = "EPOCH",
+        description = "Coordinate epoch: a decimal year (2024.5) or a date (2024-07-01, taken at 0 h). "
+            + "Required by time-dependent steps; the coordinates keep this epoch (frames change, time does not).")
+    String epoch;
+
+    @Option(names = "--helmert", paramLabel = "TX,TY,TZ,RX,RY,RZ,DS",
+        description = "Your own 7-parameter Helmert set from source to target, from your geodetic authority: "
+            + "translations TX,TY,TZ in metres, rotations RX,RY,RZ in arc-seconds, scale difference DS in ppm "
+            + "(scale 1 + DS*1e-6), small-angle matrix as EPSG defines the methods. Between two @FRAMEs it "
+            + "replaces the registry's path; without frames it applies between the ECEF positions on "
+            + "--ellipsoid. Needs --convention.")
+    String helmert;
+
+    @Option(names = "--convention", paramLabel = "CONV",
+        description = "Rotation convention of --helmert, as your source prints it: position-vector "
+            + "(EPSG 1033/9606) or coordinate-frame (EPSG 1032/9607). Required with --helmert: the same "
+            + "numbers rotate the other way in the other convention (about 60 m per arc-second).")
+    String convention;
+
+    @Option(names = "--helmert-accuracy", paramLabel = "M",
+        description = "Accuracy of the --helmert set in metres, as its source states it; without it the "
+            + "accuracy is shown as 'not stated'.")
+    String helmertAccuracy;
+
+    @Option(names = "--geoid", paramLabel = "FILE.isg",
+        description = "Geoid-undulation grid in the ISG text format, for geodetic-orthometric systems "
+            + "(bilinear interpolation). No geoid model is built in.")
+    Path geoid;
+
+    @Option(names = "--explain", description = "List every step after the result (with --json: \"steps\").")
+    boolean explain;
 
     @Option(names = "--json", description = "Print one JSON object instead of text.")
     boolean json;
@@ -86,15 +159,80 @@ public final class CoordCommand implements Callable<Integer> {
     public Integer call() {
         CoordinateSystemSpec source = CoordinateSystemSpec.parse(from);
         CoordinateSystemSpec target = CoordinateSystemSpec.parse(to);
-        Ellipsoid e = Ellipsoids.byName(ellipsoid);
-        ConvertedPoint result = Conversion.of(source, target, e).convert(values);
+        Conversion.Builder b = Conversion.builder(source, target);
+        if (ellipsoid != null) {
+            b.ellipsoid(Ellipsoids.byName(ellipsoid));
+        }
+        if (epoch != null) {
+            b.epoch(epoch(epoch));
+        }
+        userHelmert().ifPresent(b::helmert);
+        if (geoid != null) {
+            Conversion.checkGeoidUse(source, target);
+            b.geoid(GeoidGrid.read(geoid));
+        }
+        ConvertedPoint result = b.build().convert(values);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
-            out.println(JsonOutput.render(result));
+            out.println(JsonOutput.render(result, explain));
         } else {
             out.print(TextOutput.render(result));
+            if (explain) {
+                out.println();
+                out.print(StepListing.text(result.steps(), result.accuracyMetres()));
+            }
         }
         out.flush();
         return ExitCode.OK;
+    }
+
+    /** The coordinate epoch; a number outside the supported range is named as such, not as unreadable. */
+    static Epoch epoch(String text) {
+        try {
+            return Epoch.parse(text);
+        } catch (IllegalArgumentException e) {
+            Throwable c = e.getCause();
+            if (c instanceof IllegalArgumentException && !(c instanceof NumberFormatException)) {
+                throw new UserInputException("--epoch '" + text + "': " + c.getMessage(), e);
+            }
+            throw new UserInputException("--epoch: " + e.getMessage(), e);
+        }
+    }
+
+    private java.util.Optional<Conversion.UserHelmert> userHelmert() {
+        if (helmert == null) {
+            if (convention != null || helmertAccuracy != null) {
+                throw new UserInputException((convention != null ? "--convention" : "--helmert-accuracy")
+                    + " applies to --helmert, which is not given");
+            }
+            return java.util.Optional.empty();
+        }
+        if (convention == null) {
+            throw new UserInputException("--helmert needs --convention position-vector or coordinate-frame: the"
+                + " same numbers rotate the other way in the other convention (about 60 m per arc-second)");
+        }
+        String[] parts = helmert.split(",", -1);
+        String[] names = {"TX (m)", "TY (m)", "TZ (m)", "RX (arc-seconds)", "RY (arc-seconds)", "RZ (arc-seconds)",
+            "DS (ppm)"};
+        if (parts.length != names.length) {
+            throw new UserInputException("--helmert '" + helmert + "' has " + parts.length + " value"
+                + (parts.length == 1 ? "" : "s") + "; it takes 7: TX,TY,TZ (m), RX,RY,RZ (arc-seconds), DS (ppm)");
+        }
+        double[] v = new double[names.length];
+        for (int i = 0; i < v.length; i++) {
+            v[i] = NumberArgs.decimal("--helmert " + names[i], parts[i].strip());
+        }
+        RotationConvention c = RotationConvention.parse(convention);
+        OptionalDouble acc = OptionalDouble.empty();
+        if (helmertAccuracy != null) {
+            double a = NumberArgs.length("--helmert-accuracy", helmertAccuracy);
+            if (a < 0) {
+                throw new UserInputException("--helmert-accuracy " + helmertAccuracy + " m is negative");
+            }
+            acc = OptionalDouble.of(a);
+        }
+        HelmertParameters p = HelmertParameters.of(v[0], v[1], v[2], v[3], v[4], v[5], v[6]);
+        Helmert h = c == RotationConvention.POSITION_VECTOR ? Helmert.positionVector(p) : Helmert.coordinateFrame(p);
+        return java.util.Optional.of(new Conversion.UserHelmert(h, acc));
     }
 }

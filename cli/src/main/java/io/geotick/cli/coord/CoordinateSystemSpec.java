@@ -1,42 +1,52 @@
 package io.geotick.cli.coord;
 
 import io.geotick.geodesy.position.GeodeticPosition;
+import io.geotick.transforms.frames.Frame;
 import java.math.BigDecimal;
 import java.util.Objects;
 import java.util.Optional;
 
 /**
- * A coordinate system as named on the command line ({@code --from}/{@code --to}): its kind and the
- * kind's parameters. Immutable. Made by {@link #parse(String)} (which delegates to
- * {@link SystemSpecParser}, the one place SYS text is read).
+ * A coordinate system as named on the command line ({@code --from}/{@code --to}): its kind, the kind's
+ * parameters and, optionally, its reference frame ({@code SYS@FRAME}). Immutable. Made by
+ * {@link #parse(String)} (which delegates to {@link SystemSpecParser}, the one place SYS text is read).
  *
- * <p>Room to grow: a reference frame ({@code SYS@FRAME}) becomes another component here, filled by the
- * parser; the ellipsoid stays a property of the conversion (it may then come from the frame).
+ * <p>Without a frame the system is purely geometric, on the conversion's {@code --ellipsoid}. With a frame
+ * the ellipsoid is the frame's own, and a conversion between two frames takes the frame path of the
+ * registry (see {@link Conversion}).
  *
  * @param kind the kind of system
- * @param origin the geodetic origin of a local frame (present exactly when {@code kind.needsOrigin()})
+ * @param origin the geodetic origin of a local frame (present exactly when {@code kind.needsOrigin()});
+ *     with a frame it is a position in that frame, on its ellipsoid
+ * @param frame the reference frame, if one was named
  */
-public record CoordinateSystemSpec(SystemKind kind, Optional<GeodeticPosition> origin) {
+public record CoordinateSystemSpec(SystemKind kind, Optional<GeodeticPosition> origin, Optional<Frame> frame) {
     public CoordinateSystemSpec {
         Objects.requireNonNull(kind, "kind");
         Objects.requireNonNull(origin, "origin");
+        Objects.requireNonNull(frame, "frame");
         if (kind.needsOrigin() != origin.isPresent()) {
             throw new IllegalArgumentException(kind.word() + (kind.needsOrigin() ? " needs" : " takes no") + " origin");
         }
     }
 
-    /** A system without parameters (geodetic, ecef). */
+    /** A system without parameters (geodetic, ecef) and without a frame. */
     public static CoordinateSystemSpec of(SystemKind kind) {
-        return new CoordinateSystemSpec(kind, Optional.empty());
+        return new CoordinateSystemSpec(kind, Optional.empty(), Optional.empty());
     }
 
-    /** A local frame (enu, ned, aer) about a geodetic origin. */
+    /** A local frame (enu, ned, aer) about a geodetic origin, without a reference frame. */
     public static CoordinateSystemSpec local(SystemKind kind, GeodeticPosition origin) {
-        return new CoordinateSystemSpec(kind, Optional.of(origin));
+        return new CoordinateSystemSpec(kind, Optional.of(origin), Optional.empty());
+    }
+
+    /** The same system in the given reference frame. */
+    public CoordinateSystemSpec withFrame(Frame f) {
+        return new CoordinateSystemSpec(kind, origin, Optional.of(f));
     }
 
     /**
-     * Parses SYS text such as {@code geodetic} or {@code enu:55,5,200}.
+     * Parses SYS text such as {@code geodetic}, {@code enu:55,5,200} or {@code ecef@ITRF2020}.
      *
      * @throws io.geotick.cli.UserInputException naming the text and what is wrong with it
      */
@@ -44,10 +54,14 @@ public record CoordinateSystemSpec(SystemKind kind, Optional<GeodeticPosition> o
         return SystemSpecParser.parse(text);
     }
 
-    /** The canonical SYS text: {@code geodetic}, {@code enu:55,5,200} (numbers as typed, without trailing zeros). */
+    /**
+     * The canonical SYS text: {@code geodetic}, {@code enu:55,5,200} (numbers without trailing zeros),
+     * {@code geodetic@ETRF2000} (the frame's registry name).
+     */
     public String text() {
-        return origin.map(o -> kind.word() + ":" + plain(o.latitude()) + "," + plain(o.longitude()) + ","
+        String base = origin.map(o -> kind.word() + ":" + plain(o.latitude()) + "," + plain(o.longitude()) + ","
             + plain(o.height())).orElse(kind.word());
+        return frame.map(f -> base + "@" + f.name()).orElse(base);
     }
 
     @Override

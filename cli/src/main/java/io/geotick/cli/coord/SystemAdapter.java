@@ -8,6 +8,15 @@ import io.geotick.geodesy.local.LocalFrame;
 import io.geotick.geodesy.local.Ned;
 import io.geotick.geodesy.position.EcefPosition;
 import io.geotick.geodesy.position.GeodeticPosition;
+import io.geotick.transforms.StepDescription;
+import io.geotick.transforms.StepDescription.Parameter;
+import io.geotick.transforms.height.GeoidGrid;
+import io.geotick.transforms.height.Interpolation;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.OptionalInt;
 
 /**
  * Takes a point of one coordinate system to ECEF and back, on one ellipsoid: the two ends of a
@@ -15,7 +24,11 @@ import io.geotick.geodesy.position.GeodeticPosition;
  * build the geodesy module's validating value types, so an out-of-range value (latitude 91°, azimuth
  * 360°) fails there with an {@link io.geotick.geodesy.InvalidCoordinateException} naming it.
  *
- * <p>A projected grid system, when added, is one more adapter: grid → geodetic → ECEF and back.
+ * <p>Each adapter also says what it does as {@link StepDescription}s (for {@code --explain}); those are
+ * exact conversions (accuracy 0: rounding only) except where a model enters (the geoid).
+ *
+ * <p>A projected grid system, when added, is one more adapter: grid → geodetic → ECEF and back, with
+ * its projection step described the same way.
  */
 interface SystemAdapter {
     /** The point's ECEF position. */
@@ -24,28 +37,55 @@ interface SystemAdapter {
     /** The ECEF position expressed in this system, in axis order. */
     double[] fromEcef(EcefPosition p);
 
-    /** The adapter for a system on an ellipsoid. */
-    static SystemAdapter of(CoordinateSystemSpec spec, Ellipsoid ellipsoid) {
+    /** The steps of {@link #toEcef}, in order (empty for ECEF itself). */
+    List<StepDescription> toEcefSteps();
+
+    /** The steps of {@link #fromEcef}, in order (empty for ECEF itself). */
+    List<StepDescription> fromEcefSteps();
+
+    /**
+     * The adapter for a system on an ellipsoid.
+     *
+     * @param where how the listing names the ellipsoid's owner, e.g. "ETRF2000" or "--ellipsoid"
+     * @param geoid the geoid grid, required for {@link SystemKind#GEODETIC_ORTHOMETRIC}
+     */
+    static SystemAdapter of(CoordinateSystemSpec spec, Ellipsoid ellipsoid, String where, Optional<GeoidGrid> geoid) {
         switch (spec.kind()) {
             case GEODETIC:
-                return new Geodetic(EcefConverter.of(ellipsoid));
+                return new Geodetic(ellipsoid, where);
+            case GEODETIC_ORTHOMETRIC:
+                return new Orthometric(new Geodetic(ellipsoid, where), geoid.orElseThrow(() ->
+                    new io.geotick.cli.UserInputException("coordinate system '" + spec.text() + "' needs a geoid "
+                        + "model: give --geoid FILE.isg")));
             case ECEF:
                 return new Ecef();
             case ENU:
             case NED:
             case AER:
-                return new Local(spec.kind(), LocalFrame.at(spec.origin().orElseThrow(), ellipsoid));
+                return new Local(spec.kind(), spec.origin().orElseThrow(), ellipsoid, where);
             default:
                 throw new IllegalStateException("no adapter for " + spec.kind());
         }
     }
 
-    /** Geodetic latitude, longitude, height. */
+    /** The EPSG 9602 conversion step on an ellipsoid (as the transforms chain lists it). */
+    static StepDescription geographicGeocentric(boolean toEcef, Ellipsoid e, String where) {
+        return new StepDescription((toEcef ? "geodetic → ECEF" : "ECEF → geodetic") + " on " + e.name() + " ("
+            + where + ")", "Geographic/geocentric conversion", OptionalInt.of(9602), OptionalInt.empty(),
+            List.of(new Parameter("a", e.semiMajorAxis(), "m"), new Parameter("1/f", e.inverseFlattening(), "")),
+            "IOGP Guidance Note 7-2, §4.1.1; ellipsoid " + e.name() + " (" + e.source() + ")", 0, List.of());
+    }
+
+    /** Geodetic latitude, longitude, ellipsoidal height. */
     final class Geodetic implements SystemAdapter {
         private final EcefConverter converter;
+        private final Ellipsoid ellipsoid;
+        private final String where;
 
-        Geodetic(EcefConverter converter) {
-            this.converter = converter;
+        Geodetic(Ellipsoid ellipsoid, String where) {
+            this.converter = EcefConverter.of(ellipsoid);
+            this.ellipsoid = ellipsoid;
+            this.where = where;
         }
 
         @Override
@@ -57,6 +97,76 @@ interface SystemAdapter {
         public double[] fromEcef(EcefPosition p) {
             GeodeticPosition g = converter.toGeodetic(p);
             return new double[] {g.latitude(), g.longitude(), g.height()};
+        }
+
+        @Override
+        public List<StepDescription> toEcefSteps() {
+            return List.of(geographicGeocentric(true, ellipsoid, where));
+        }
+
+        @Override
+        public List<StepDescription> fromEcefSteps() {
+            return List.of(geographicGeocentric(false, ellipsoid, where));
+        }
+    }
+
+    /**
+     * Geodetic with orthometric heights: h = H + N on the way in, H = h − N on the way out, N bilinear
+     * from the ISG grid (the geoid grid's stated approximation: deflection of the vertical neglected, below
+     * 1 mm in practice).
+     */
+    final class Orthometric implements SystemAdapter {
+        private final Geodetic geodetic;
+        private final GeoidGrid grid;
+
+        Orthometric(Geodetic geodetic, GeoidGrid grid) {
+            this.geodetic = geodetic;
+            this.grid = grid;
+        }
+
+        @Override
+        public EcefPosition toEcef(double[] v) {
+            // Range checks of latitude and longitude come first, from the geodetic position type.
+            GeodeticPosition.of(v[0], v[1], 0);
+            double h = grid.ellipsoidalHeight(v[0], v[1], v[2], Interpolation.BILINEAR);
+            return geodetic.toEcef(new double[] {v[0], v[1], h});
+        }
+
+        @Override
+        public double[] fromEcef(EcefPosition p) {
+            double[] g = geodetic.fromEcef(p);
+            g[2] = grid.orthometricHeight(g[0], g[1], g[2], Interpolation.BILINEAR);
+            return g;
+        }
+
+        private StepDescription height(boolean toEllipsoidal) {
+            String ref = grid.header().getOrDefault("ref frame", "not stated") + ", ellipsoid "
+                + grid.header().getOrDefault("ref ellipsoid", "not stated");
+            return new StepDescription(toEllipsoidal ? "orthometric → ellipsoidal height (h = H + N)"
+                : "ellipsoidal → orthometric height (H = h − N)", "Geoid undulation from " + grid.modelName()
+                + ", " + Interpolation.BILINEAR.name().toLowerCase(Locale.ROOT) + " interpolation",
+                OptionalInt.empty(), OptionalInt.empty(), List.of(
+                    new Parameter("latitude spacing", grid.latitudeSpacing(), "degree"),
+                    new Parameter("longitude spacing", grid.longitudeSpacing(), "degree")),
+                "ISG grid " + grid.name() + " (model frame: " + ref + ")", 0,
+                List.of("the accuracy is that of the geoid model, which ISG files do not state; the model's frame"
+                    + " and ellipsoid should match this system's, or N is off by up to the datum difference in"
+                    + " height"));
+        }
+
+        @Override
+        public List<StepDescription> toEcefSteps() {
+            List<StepDescription> s = new ArrayList<>();
+            s.add(height(true));
+            s.addAll(geodetic.toEcefSteps());
+            return s;
+        }
+
+        @Override
+        public List<StepDescription> fromEcefSteps() {
+            List<StepDescription> s = new ArrayList<>(geodetic.fromEcefSteps());
+            s.add(height(false));
+            return s;
         }
     }
 
@@ -71,16 +181,32 @@ interface SystemAdapter {
         public double[] fromEcef(EcefPosition p) {
             return new double[] {p.x(), p.y(), p.z()};
         }
+
+        @Override
+        public List<StepDescription> toEcefSteps() {
+            return List.of();
+        }
+
+        @Override
+        public List<StepDescription> fromEcefSteps() {
+            return List.of();
+        }
     }
 
     /** ENU, NED or AER in a local tangent frame. */
     final class Local implements SystemAdapter {
         private final SystemKind kind;
         private final LocalFrame frame;
+        private final GeodeticPosition origin;
+        private final Ellipsoid ellipsoid;
+        private final String where;
 
-        Local(SystemKind kind, LocalFrame frame) {
+        Local(SystemKind kind, GeodeticPosition origin, Ellipsoid ellipsoid, String where) {
             this.kind = kind;
-            this.frame = frame;
+            this.frame = LocalFrame.at(origin, ellipsoid);
+            this.origin = origin;
+            this.ellipsoid = ellipsoid;
+            this.where = where;
         }
 
         @Override
@@ -111,6 +237,33 @@ interface SystemAdapter {
                     return new double[] {a.azimuth(), a.elevation(), a.range()};
                 }
             }
+        }
+
+        private StepDescription step(boolean toEcef) {
+            String local = kind.word().toUpperCase(Locale.ROOT);
+            String extra = kind == SystemKind.ENU ? ""
+                : kind == SystemKind.NED ? "; north, east, down = the ENU axes reordered, up negated (common practice)"
+                : "; azimuth = atan2(E, N), elevation = atan2(U, √(E² + N²)), range = |ENU| (common practice)";
+            return new StepDescription((toEcef ? local + " → ECEF" : "ECEF → " + local) + " about the origin on "
+                + ellipsoid.name() + " (" + where + ")", "Geocentric/topocentric conversion" + extra,
+                OptionalInt.of(9836), OptionalInt.empty(), List.of(
+                    new Parameter("origin latitude", origin.latitude(), "degree"),
+                    new Parameter("origin longitude", origin.longitude(), "degree"),
+                    new Parameter("origin height", origin.height(), "m"),
+                    new Parameter("a", ellipsoid.semiMajorAxis(), "m"),
+                    new Parameter("1/f", ellipsoid.inverseFlattening(), "")),
+                "IOGP Guidance Note 7-2, §4.1.2; ellipsoid " + ellipsoid.name() + " (" + ellipsoid.source() + ")", 0,
+                List.of());
+        }
+
+        @Override
+        public List<StepDescription> toEcefSteps() {
+            return List.of(step(true));
+        }
+
+        @Override
+        public List<StepDescription> fromEcefSteps() {
+            return List.of(step(false));
         }
     }
 }

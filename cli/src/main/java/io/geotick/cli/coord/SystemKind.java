@@ -27,7 +27,14 @@ public enum SystemKind {
     NED("ned", true, new Axis("n", "north", METRE), new Axis("e", "east", METRE), new Axis("d", "down", METRE)),
     /** Azimuth (degrees clockwise from north), elevation (degrees), slant range (metres) from an origin. */
     AER("aer", true,
-        new Axis("az", "azimuth", DEGREE, true), new Axis("el", "elevation", DEGREE), new Axis("range", "range", METRE));
+        new Axis("az", "azimuth", DEGREE, true), new Axis("el", "elevation", DEGREE), new Axis("range", "range", METRE)),
+    /**
+     * Latitude, longitude (degrees) and orthometric height H = h − N (metres, above the geoid), with the
+     * undulation N from the geoid grid given by {@code --geoid}. JSON key {@code H}, text label
+     * {@code orthometric-height}, so it can never be mistaken for the ellipsoidal {@code h}.
+     */
+    GEODETIC_ORTHOMETRIC("geodetic-orthometric", false, new Axis("lat", "latitude", DEGREE),
+        new Axis("lon", "longitude", DEGREE), new Axis("H", "orthometric-height", METRE));
 
     private final String word;
     private final boolean needsOrigin;

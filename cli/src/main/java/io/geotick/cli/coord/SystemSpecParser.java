@@ -3,33 +3,58 @@ package io.geotick.cli.coord;
 import io.geotick.cli.UserInputException;
 import io.geotick.geodesy.InvalidCoordinateException;
 import io.geotick.geodesy.position.GeodeticPosition;
+import io.geotick.transforms.frames.Frame;
+import io.geotick.transforms.frames.FrameRegistry;
+import io.geotick.transforms.frames.UnknownFrameException;
 
 /**
  * Reads SYS text into a {@link CoordinateSystemSpec}. This is the only class that knows the SYS syntax:
  * <pre>
- *   SYS    = KIND | KIND ":" LAT "," LON "," H
- *   KIND   = geodetic | ecef | enu | ned | aer        (case ignored)
+ *   SYS    = BASE | BASE "@" FRAME
+ *   BASE   = KIND | KIND ":" LAT "," LON "," H
+ *   KIND   = geodetic | ecef | enu | ned | aer | geodetic-orthometric     (case ignored)
+ *   FRAME  = a name or alias of the frame registry (geotick frames), e.g. ITRF2020, ETRF2000, OSGB36
  * </pre>
  * Local kinds (enu, ned, aer) need the origin, geodetic (LAT, LON in degrees, H in metres); the others
- * take none. Every error is a {@link UserInputException} quoting the text.
- *
- * <p>FRAME PLUG-IN POINT: reference frames will be written {@code SYS@FRAME}; the {@code @} split is
- * done first, below, and today refuses any frame.
+ * take none. The {@code @} split is done first, so a map-grid kind with its own parameters
+ * ({@code utm:31N@ED50}) fits the same rule. Every error is a {@link UserInputException} quoting the text.
  */
 final class SystemSpecParser {
     private SystemSpecParser() {
     }
 
     static CoordinateSystemSpec parse(String text) {
+        return parse(text, FrameRegistry.standard());
+    }
+
+    static CoordinateSystemSpec parse(String text, FrameRegistry registry) {
         if (text == null || text.isBlank()) {
             throw new UserInputException("coordinate system is empty; known: " + SystemKind.knownSyntax());
         }
         String t = text.strip();
         int at = t.indexOf('@');
-        if (at >= 0) {
-            throw new UserInputException("coordinate system '" + text + "': reference frames ('@"
-                + t.substring(at + 1) + "') are not supported yet; known: " + SystemKind.knownSyntax());
+        if (at < 0) {
+            return parseBase(text, t);
         }
+        String frameName = t.substring(at + 1).strip();
+        if (frameName.isEmpty()) {
+            throw new UserInputException("coordinate system '" + text + "': the frame after '@' is empty; "
+                + "write e.g. ecef@ITRF2020 (geotick frames lists the frames)");
+        }
+        if (at == 0) {
+            throw new UserInputException("coordinate system '" + text + "' has a frame but no kind; write e.g. "
+                + "geodetic@" + frameName);
+        }
+        Frame f;
+        try {
+            f = registry.frame(frameName);
+        } catch (UnknownFrameException e) {
+            throw new UserInputException("coordinate system '" + text + "': " + e.getMessage(), e);
+        }
+        return parseBase(text, t.substring(0, at).strip()).withFrame(f);
+    }
+
+    private static CoordinateSystemSpec parseBase(String text, String t) {
         int colon = t.indexOf(':');
         String word = (colon < 0 ? t : t.substring(0, colon)).strip();
         SystemKind kind = SystemKind.byWord(word).orElseThrow(() -> new UserInputException(

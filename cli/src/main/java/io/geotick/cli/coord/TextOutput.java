@@ -14,7 +14,9 @@ import java.util.List;
  * longitude    2.12955000000 deg
  * height      73.000000 m
  * </pre>
- * The first word of each line is a fixed label, so a script can pick a value by its label.
+ * The first word of each line is a fixed label, so a script can pick a value by its label. An
+ * {@code epoch} line follows {@code ellipsoid} when a coordinate epoch was given, and one {@code warning}
+ * line per caution of the parameter sets used comes last.
  */
 public final class TextOutput {
     private TextOutput() {
@@ -25,6 +27,7 @@ public final class TextOutput {
         List<String[]> rows = new ArrayList<>();
         rows.add(new String[] {"system", p.system().text()});
         rows.add(new String[] {"ellipsoid", p.ellipsoid()});
+        p.epoch().ifPresent(e -> rows.add(new String[] {"epoch", e.toString()}));
         int width = "ellipsoid".length();
         int intWidth = 0;
         List<String> numbers = new ArrayList<>();
@@ -39,6 +42,9 @@ public final class TextOutput {
             String s = numbers.get(i);
             rows.add(new String[] {f.axis().label(),
                 " ".repeat(intWidth - s.indexOf('.')) + s + " " + f.axis().unit().symbol()});
+        }
+        for (String w : p.warnings()) {
+            rows.add(new String[] {"warning", w});
         }
         StringBuilder sb = new StringBuilder();
         String nl = System.lineSeparator();

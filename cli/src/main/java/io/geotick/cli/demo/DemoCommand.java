@@ -19,12 +19,22 @@ public final class DemoCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    /**
-     * DEMO PARTS, in the order they run. Each module's part is added here (the time part joins on merge).
-     */
+    /** DEMO PARTS, in the order they run. Each module's part is added here. */
     static List<DemoPart> parts() {
         return List.of(
-            new GeodesyDemo());
+            new GeodesyDemo(),
+            new DatumDemo(),
+            new DemoPart() {
+                @Override
+                public String title() {
+                    return "Timestamps";
+                }
+
+                @Override
+                public void run(PrintWriter out) {
+                    TimeDemo.run(out);
+                }
+            });
     }
 
     @Override

@@ -128,7 +128,7 @@ class CoordCommandTest {
         args.addAll(List.of(from.valueArgs()));
         JsonNode n = json(coord(args.toArray(String[]::new)));
         List<String> expectedFields = new ArrayList<>(to.keys());
-        expectedFields.addAll(List.of("system", "ellipsoid"));
+        expectedFields.addAll(List.of("system", "ellipsoid", "from", "to", "epoch"));
         assertThat(fieldNames(n)).containsExactlyElementsOf(expectedFields);
         for (int i = 0; i < 3; i++) {
             JsonNode v = n.get(to.keys().get(i));
@@ -137,6 +137,9 @@ class CoordCommandTest {
         }
         assertThat(n.get("system").asText()).isEqualTo(to.sys());
         assertThat(n.get("ellipsoid").asText()).isEqualTo("WGS 84");
+        assertThat(n.get("from").asText()).isEqualTo(from.sys());
+        assertThat(n.get("to").asText()).isEqualTo(to.sys());
+        assertThat(n.get("epoch").isNull()).isTrue();
     }
 
     @Test
@@ -212,15 +215,15 @@ class CoordCommandTest {
     void jsonFieldNamesForEachTarget() throws Exception {
         String[] point = {"--", "3771793.968", "140253.342", "5124304.349"};
         assertThat(fieldNames(json(coord(concat(new String[] {"--from", "ecef", "--to", "geodetic", "--json"}, point)))))
-            .containsExactly("lat", "lon", "h", "system", "ellipsoid");
+            .containsExactly("lat", "lon", "h", "system", "ellipsoid", "from", "to", "epoch");
         assertThat(fieldNames(json(coord(concat(new String[] {"--from", "ecef", "--to", "ecef", "--json"}, point)))))
-            .containsExactly("x", "y", "z", "system", "ellipsoid");
+            .containsExactly("x", "y", "z", "system", "ellipsoid", "from", "to", "epoch");
         assertThat(fieldNames(json(coord(concat(new String[] {"--from", "ecef", "--to", "enu:1,2,3", "--json"},
-            point))))).containsExactly("e", "n", "u", "system", "ellipsoid");
+            point))))).containsExactly("e", "n", "u", "system", "ellipsoid", "from", "to", "epoch");
         assertThat(fieldNames(json(coord(concat(new String[] {"--from", "ecef", "--to", "ned:1,2,3", "--json"},
-            point))))).containsExactly("n", "e", "d", "system", "ellipsoid");
+            point))))).containsExactly("n", "e", "d", "system", "ellipsoid", "from", "to", "epoch");
         assertThat(fieldNames(json(coord(concat(new String[] {"--from", "ecef", "--to", "aer:1,2,3", "--json"},
-            point))))).containsExactly("az", "el", "range", "system", "ellipsoid");
+            point))))).containsExactly("az", "el", "range", "system", "ellipsoid", "from", "to", "epoch");
     }
 
     // ---- negative values, with and without "--" ----

@@ -34,7 +34,7 @@ class SystemSpecParserTest {
         assertThatThrownBy(() -> CoordinateSystemSpec.parse("polar"))
             .isInstanceOf(UserInputException.class)
             .hasMessage("unknown coordinate system 'polar'; known: geodetic, ecef, enu:LAT,LON,H, ned:LAT,LON,H, "
-                + "aer:LAT,LON,H");
+                + "aer:LAT,LON,H, geodetic-orthometric");
         assertThatThrownBy(() -> CoordinateSystemSpec.parse("")).hasMessageContaining("empty");
         assertThatThrownBy(() -> CoordinateSystemSpec.parse("aer")).hasMessageContaining("'aer' needs its origin");
         assertThatThrownBy(() -> CoordinateSystemSpec.parse("ecef:1,2,3")).hasMessageContaining("takes no parameters");
@@ -45,7 +45,29 @@ class SystemSpecParserTest {
         assertThatThrownBy(() -> CoordinateSystemSpec.parse("enu:-90.5,2,3"))
             .isInstanceOf(UserInputException.class).hasMessageContaining("origin latitude -90.5");
         assertThatThrownBy(() -> CoordinateSystemSpec.parse("enu:1,400,3")).hasMessageContaining("origin longitude 400");
-        assertThatThrownBy(() -> CoordinateSystemSpec.parse("geodetic@ITRF2020"))
-            .hasMessageContaining("'@ITRF2020'").hasMessageContaining("not supported yet");
+        assertThatThrownBy(() -> CoordinateSystemSpec.parse("geodetic@ITRF2099"))
+            .isInstanceOf(UserInputException.class)
+            .hasMessageContaining("'geodetic@ITRF2099'").hasMessageContaining("unknown frame 'ITRF2099'")
+            .hasMessageContaining("known frames: ITRF2020");
+        assertThatThrownBy(() -> CoordinateSystemSpec.parse("geodetic@")).hasMessageContaining("frame after '@' is empty");
+        assertThatThrownBy(() -> CoordinateSystemSpec.parse("@ED50")).hasMessageContaining("no kind");
+        assertThatThrownBy(() -> CoordinateSystemSpec.parse("polar@ED50")).hasMessageContaining("unknown coordinate system");
+    }
+
+    @Test
+    void framesFollowTheAt() {
+        CoordinateSystemSpec s = CoordinateSystemSpec.parse("geodetic@etrf2000");
+        assertThat(s.kind()).isEqualTo(SystemKind.GEODETIC);
+        assertThat(s.frame()).hasValueSatisfying(f -> assertThat(f.name()).isEqualTo("ETRF2000"));
+        assertThat(s.text()).isEqualTo("geodetic@ETRF2000");
+        // Aliases resolve to the registry name.
+        assertThat(CoordinateSystemSpec.parse("ecef@OSGB36").text()).isEqualTo("ecef@OSGB 1936");
+        CoordinateSystemSpec local = CoordinateSystemSpec.parse("enu:52.5,-1.25,80@OSGB36");
+        assertThat(local.kind()).isEqualTo(SystemKind.ENU);
+        assertThat(local.origin()).isPresent();
+        assertThat(local.text()).isEqualTo("enu:52.5,-1.25,80@OSGB 1936");
+        assertThat(CoordinateSystemSpec.parse("geodetic-orthometric@ETRF2000").kind())
+            .isEqualTo(SystemKind.GEODETIC_ORTHOMETRIC);
+        assertThat(CoordinateSystemSpec.parse("geodetic").frame()).isEmpty();
     }
 }

@@ -34,4 +34,12 @@ class DemoCommandTest {
         assertThat(out).contains("ECEF", "latitude", "east", "azimuth", "GPS altitude", "Round trips", " nm");
         assertThat(out).contains("above the horizon");
     }
+
+    @Test
+    void datumPartShowsTheShiftsAndTheCostOfMixUps() {
+        String out = CliRun.of("demo").out();
+        assertThat(out).contains("Datum shifts", "ITRF2020", "ETRF2000", "ED50", "fictional company");
+        assertThat(out).contains("coordinate-frame rotation", "reference epoch", "steps: 2", "source: EUREF");
+        assertThat(out).contains("geotick coord --from ecef@ITRF2020 --to geodetic@ETRF2000");
+    }
 }
