@@ -51,7 +51,9 @@ import org.hipparchus.util.Pair;
  *       threshold (default 3). This is the internally studentised residual test with a fixed critical
  *       value (Pope's τ test in its simple form; common practice). A single blunder spreads into the other
  *       residuals, so refit without the flagged points ({@link SiteFit#refitWithoutOutliers()}) and look
- *       again. σ₀ below the rounding level 1e-14·max|coordinate| is raised to it for the test, so exact data
+ *       again. Because σ₀ comes from the same residuals, a used point's |wᵢ| can never exceed √r: with a
+ *       redundancy of 9 or less a threshold of 3 flags nothing, and only a left-out point's prediction
+ *       residual can show a blunder. σ₀ below the rounding level 1e-14·max|coordinate| is raised to it for the test, so exact data
  *       flag nothing.</li>
  * </ol>
  * Redundancy r = d·n − u: 2n − 4, 2n − 6, 3n − 7. Minimum points: 2, 3, 3.
