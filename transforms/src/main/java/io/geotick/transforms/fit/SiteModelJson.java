@@ -231,6 +231,17 @@ final class SiteModelJson {
                 throw bad(what, field, e.getMessage());
             }
         }
+        if (red != d * usedCount - u) {
+            throw bad(what, "statistics.redundancy", "is " + red + "; a " + kind.id() + " fitted to " + usedCount
+                + " points has " + (d * usedCount - u));
+        }
+        if (res.size() != given) {
+            throw bad(what, "residuals", "has " + res.size() + " entries for " + given + " points given");
+        }
+        if ((red == 0) != cov.isEmpty()) {
+            throw bad(what, "covariance", red == 0 ? "must be null for a fit without redundancy"
+                : "is null although the fit has redundancy " + red);
+        }
         FitStatistics stats;
         try {
             stats = new FitStatistics(given, usedCount, red, s0, rms, thr, res);

@@ -53,6 +53,10 @@ class SiteModelJsonTest {
             .isInstanceOf(SiteModelFormatException.class).hasMessageContaining("'statistics.rms_m'");
         assertThatThrownBy(() -> SiteModel.fromJson(good.replace("\"source\" : [", "\"source\" : [1, ")))
             .isInstanceOf(SiteModelFormatException.class).hasMessageContaining("'centroid.source'");
+        assertThatThrownBy(() -> SiteModel.fromJson(good.replace("\"redundancy\" : 8", "\"redundancy\" : 7")))
+            .isInstanceOf(SiteModelFormatException.class).hasMessageContaining("'statistics.redundancy' is 7");
+        assertThatThrownBy(() -> SiteModel.fromJson(good.replaceFirst("\"covariance\" : \\[", "\"covariance\" : [[1], ")))
+            .isInstanceOf(SiteModelFormatException.class).hasMessageContaining("'covariance'");
         Path f = dir.resolve("broken.json");
         Files.writeString(f, good.replace("\"id\" : \"P2\"", "\"id\" : 2"));
         assertThatThrownBy(() -> SiteModel.read(f)).isInstanceOf(SiteModelFormatException.class)
