@@ -30,6 +30,7 @@ import java.util.regex.Pattern;
 import org.locationtech.proj4j.CRSFactory;
 import org.locationtech.proj4j.CoordinateReferenceSystem;
 import org.locationtech.proj4j.datum.Datum;
+import org.locationtech.proj4j.proj.ExtendedTransverseMercatorProjection;
 import org.locationtech.proj4j.proj.LambertConformalConicProjection;
 import org.locationtech.proj4j.proj.LongLatProjection;
 import org.locationtech.proj4j.proj.MercatorProjection;
@@ -106,7 +107,8 @@ public final class EpsgSystems {
                 + "bundled with Proj4J");
         }
         Projection p = crs.getProjection();
-        Ellipsoid ellipsoid = ellipsoid(p.getEllipsoid());
+        // EPSG:3857 is defined on WGS 84; Proj4J models its spherical formulas with a sphere of radius a.
+        Ellipsoid ellipsoid = code == 3857 ? Ellipsoids.WGS84 : ellipsoid(p.getEllipsoid());
         Datum d = crs.getDatum();
         Optional<HelmertParameters> shift = toWgs84(d);
         List<String> cautions = new ArrayList<>();
@@ -120,7 +122,9 @@ public final class EpsgSystems {
                 + " metres (convert them yourself: no unit conversion is applied)");
         }
         Mapped m = map(code, p, ellipsoid);
-        cautions.addAll(m.method.cautions());
+        if (!m.method.inHouse()) {
+            cautions.addAll(m.method.cautions());
+        }
         return new EpsgSystem(code, EpsgSystem.Kind.PROJECTED, ellipsoid, d.getName(), shift,
             Optional.of(m.projection), Optional.of(m.method), unit, cautions);
     }
@@ -135,8 +139,9 @@ public final class EpsgSystems {
         double fe = p.getFalseEasting();
         double fn = p.getFalseNorthing();
         String where = "EPSG:" + code + " parameters from the EPSG definitions bundled with Proj4J";
-        if (p instanceof TransverseMercatorProjection) {
-            // Proj4J's UTM variant extends this class; both are the same method with these parameters.
+        if (p instanceof TransverseMercatorProjection || p instanceof ExtendedTransverseMercatorProjection) {
+            // Proj4J's two Transverse Mercator classes (plain and the extended one it uses for UTM) are the
+            // same method with these parameters.
             TransverseMercator tm = TransverseMercator.of(e, lon0, k0, fe, fn, lat0);
             return new Mapped(tm, new ProjectionMethod(ProjectionMethod.TM_METHOD, OptionalInt.of(9807), List.of(
                 new Parameter("latitude of natural origin", lat0, "degree"),
@@ -206,14 +211,26 @@ public final class EpsgSystems {
         return Math.abs(r - degrees) < 1e-12 ? r + 0.0 : degrees;
     }
 
-    /** The catalogued ellipsoid with the same axes (within 0.1 mm and 1e-12 in e²), else one from Proj4J's. */
+    /**
+     * The catalogued ellipsoid with the same axes (a within 0.1 mm, b within 2 mm), else one from Proj4J's.
+     * The tolerance on b admits Proj4J's Airy 1830, whose b is 6 356 256.910 m against EPSG's 6 356 256.909 m;
+     * the catalogued (EPSG) axes are then used, a difference below 1 mm in position (reference tests).
+     */
     static Ellipsoid ellipsoid(org.locationtech.proj4j.datum.Ellipsoid pe) {
         double a = pe.getEquatorRadius();
         double e2 = pe.getEccentricitySquared();
+        double b = a * Math.sqrt(1 - e2);
+        // The closest in b: WGS 84 and GRS 1980 differ by only 0.1 mm there.
+        Ellipsoid best = null;
         for (Ellipsoid e : Ellipsoids.all()) {
-            if (Math.abs(e.semiMajorAxis() - a) < 1e-4 && Math.abs(e.eccentricitySquared() - e2) < 1e-12) {
-                return e;
+            if (Math.abs(e.semiMajorAxis() - a) < 1e-4 && Math.abs(e.semiMinorAxis() - b) < 0.002
+                    && (e2 == 0) == (e.eccentricitySquared() == 0)
+                    && (best == null || Math.abs(e.semiMinorAxis() - b) < Math.abs(best.semiMinorAxis() - b))) {
+                best = e;
             }
+        }
+        if (best != null) {
+            return best;
         }
         String source = "axes from the EPSG definitions bundled with Proj4J";
         return e2 == 0 ? Ellipsoid.sphere(pe.getName(), a, source)
@@ -308,9 +325,9 @@ public final class EpsgSystems {
         String src = "shift to WGS 84 of " + s.name() + " from the EPSG definitions bundled with Proj4J";
         FrameLink l = h.isTranslationOnly()
             ? FrameLink.geocentricTranslations(datumFrame(s), registry.frame("WGS 84"), h.tx(), h.ty(), h.tz(), 0, src,
-                0, "accuracy not stated by the definition")
+                0)
             : FrameLink.helmert(datumFrame(s), registry.frame("WGS 84"), h, RotationConvention.POSITION_VECTOR, 0, src,
-                0, "accuracy not stated by the definition");
+                0);
         return Optional.of(l);
     }
 
