@@ -28,8 +28,11 @@ import org.locationtech.proj4j.proj.Projection;
 class EpsgSystemsReferenceTest {
     private static final CRSFactory CRS = new CRSFactory();
 
+    private static final java.util.Map<Integer, Projection> PROJECTIONS = new java.util.HashMap<>();
+
     private static double[] proj4j(int code, double lat, double lon) {
-        Projection p = CRS.createFromName("EPSG:" + code).getProjection();
+        // Proj4J reads its EPSG file on every lookup: one projection object per code.
+        Projection p = PROJECTIONS.computeIfAbsent(code, c -> CRS.createFromName("EPSG:" + c).getProjection());
         ProjCoordinate out = p.project(new ProjCoordinate(lon, lat), new ProjCoordinate());
         return new double[] {out.x, out.y};
     }
