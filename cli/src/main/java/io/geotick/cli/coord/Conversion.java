@@ -272,7 +272,8 @@ public final class Conversion {
                     + " for the same frame) or at neither");
             }
             for (CoordinateSystemSpec end : List.of(source, target)) {
-                end.epsg().ifPresent(this::joinEpsgDatum);
+                CoordinateSystemSpec e = end.site().map(CoordinateSystemSpec.Site::source).orElse(end);
+                e.epsg().ifPresent(s -> joinEpsgDatum(e, s));
             }
             return sf ? betweenFrames(source.frame().orElseThrow(), target.frame().orElseThrow()) : geometric();
         }
@@ -318,12 +319,10 @@ public final class Conversion {
          * An EPSG end: its own cautions become warnings; a datum that matches no registry frame joins the
          * registry through Proj4J's shift to WGS 84, with a warning saying so.
          */
-        private void joinEpsgDatum(EpsgSystem s) {
+        private void joinEpsgDatum(CoordinateSystemSpec end, EpsgSystem s) {
             s.cautions().forEach(c -> addWarning(s.name() + ": " + c));
             Frame implied = EpsgSystems.datumFrame(s);
-            boolean usesOwnDatum = (source.epsg().equals(Optional.of(s)) && source.frame().get().equals(implied))
-                || (target.epsg().equals(Optional.of(s)) && target.frame().get().equals(implied));
-            if (!usesOwnDatum || registry.contains(implied.name())) {
+            if (!end.frame().orElseThrow().equals(implied) || registry.contains(implied.name())) {
                 return;
             }
             Optional<FrameLink> link = EpsgSystems.datumLink(s, registry);

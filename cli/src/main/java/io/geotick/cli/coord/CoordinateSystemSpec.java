@@ -2,6 +2,7 @@ package io.geotick.cli.coord;
 
 import io.geotick.geodesy.position.GeodeticPosition;
 import io.geotick.transforms.epsg.EpsgSystem;
+import io.geotick.transforms.fit.SiteModel;
 import io.geotick.transforms.frames.Frame;
 import java.math.BigDecimal;
 import java.util.Objects;
@@ -27,13 +28,38 @@ import java.util.Optional;
  *     (the canonical text then leaves it out)
  */
 public record CoordinateSystemSpec(SystemKind kind, Optional<GeodeticPosition> origin, Optional<Frame> frame,
-        Optional<String> grid, Optional<EpsgSystem> epsg, boolean frameImplied) {
+        Optional<String> grid, Optional<EpsgSystem> epsg, boolean frameImplied, Optional<Site> site) {
+
+    /**
+     * A fitted site grid: the model file as named, the model, and the system the model starts from (its
+     * frame is the site system's).
+     */
+    public record Site(String file, SiteModel model, CoordinateSystemSpec source) {
+        public Site {
+            Objects.requireNonNull(file, "file");
+            Objects.requireNonNull(model, "model");
+            Objects.requireNonNull(source, "source");
+        }
+    }
+
+    public CoordinateSystemSpec(SystemKind kind, Optional<GeodeticPosition> origin, Optional<Frame> frame,
+            Optional<String> grid, Optional<EpsgSystem> epsg, boolean frameImplied) {
+        this(kind, origin, frame, grid, epsg, frameImplied, Optional.empty());
+    }
+
+    /** A site grid: the frame is the model's source system's, implied. */
+    public static CoordinateSystemSpec site(Site s) {
+        return new CoordinateSystemSpec(s.model().kind().dimension() == 3 ? SystemKind.SITE_3D : SystemKind.SITE_2D,
+            Optional.empty(), s.source().frame(), Optional.of(s.file()), Optional.empty(), true, Optional.of(s));
+    }
+
     public CoordinateSystemSpec {
         Objects.requireNonNull(kind, "kind");
         Objects.requireNonNull(origin, "origin");
         Objects.requireNonNull(frame, "frame");
         Objects.requireNonNull(grid, "grid");
         Objects.requireNonNull(epsg, "epsg");
+        Objects.requireNonNull(site, "site");
         if (kind.needsOrigin() != origin.isPresent()) {
             throw new IllegalArgumentException(kind.word() + (kind.needsOrigin() ? " needs" : " takes no") + " origin");
         }
@@ -71,7 +97,7 @@ public record CoordinateSystemSpec(SystemKind kind, Optional<GeodeticPosition> o
 
     /** The same system in the given reference frame. */
     public CoordinateSystemSpec withFrame(Frame f) {
-        return new CoordinateSystemSpec(kind, origin, Optional.of(f), grid, epsg, false);
+        return new CoordinateSystemSpec(kind, origin, Optional.of(f), grid, epsg, false, site);
     }
 
     /**

@@ -12,6 +12,11 @@ import io.geotick.transforms.StepDescription;
 import io.geotick.transforms.StepDescription.Parameter;
 import io.geotick.transforms.epsg.EpsgSystem;
 import io.geotick.transforms.epsg.ProjectionMethod;
+import io.geotick.transforms.fit.FitParameter;
+import io.geotick.transforms.fit.FitStatistics;
+import io.geotick.transforms.fit.SiteModel;
+import io.geotick.transforms.fit.SitePoint;
+import io.geotick.transforms.fit.SiteTransform;
 import io.geotick.transforms.projection.GridPosition;
 import io.geotick.transforms.projection.Hemisphere;
 import io.geotick.transforms.projection.MapProjection;
@@ -76,6 +81,11 @@ interface SystemAdapter {
             case UPS:
             case EPSG_PROJECTED:
                 return new Grid(spec, ellipsoid, where);
+            case SITE_2D:
+            case SITE_3D: {
+                CoordinateSystemSpec.Site s = spec.site().orElseThrow();
+                return new SiteGrid(s, of(s.source(), ellipsoid, where, geoid));
+            }
             default:
                 throw new IllegalStateException("no adapter for " + spec.kind());
         }
@@ -211,6 +221,68 @@ interface SystemAdapter {
         List<StepDescription> fromEcefSteps(Result r) {
             List<StepDescription> s = new ArrayList<>(geodetic.fromEcefSteps());
             s.add(step(true, r.projectionName(), r.method()));
+            return s;
+        }
+    }
+
+    /**
+     * A site grid fitted by {@code geotick fit}: the model's source system (its own adapter), then the
+     * fitted model on its first two values (2D, the third passed through) or all three (Helmert); as a
+     * source, the model's inverse (exact to rounding) and then the source system.
+     */
+    final class SiteGrid implements SystemAdapter {
+        private final CoordinateSystemSpec.Site site;
+        private final SystemAdapter inner;
+        private final SiteTransform inverse;
+
+        SiteGrid(CoordinateSystemSpec.Site site, SystemAdapter inner) {
+            this.site = site;
+            this.inner = inner;
+            this.inverse = site.model().inverse();
+        }
+
+        @Override
+        public EcefPosition toEcef(double[] v) {
+            SitePoint s = inverse.apply(v[0], v[1], v[2]);
+            return inner.toEcef(new double[] {s.x(), s.y(), s.z()});
+        }
+
+        @Override
+        public double[] fromEcef(EcefPosition p) {
+            double[] v = inner instanceof Grid ? ((Grid) inner).gridFromEcef(p).values() : inner.fromEcef(p);
+            SitePoint s = site.model().apply(v[0], v[1], v[2]);
+            return new double[] {s.x(), s.y(), s.z()};
+        }
+
+        private StepDescription step(boolean forward) {
+            SiteModel m = site.model();
+            List<Parameter> ps = new ArrayList<>();
+            for (FitParameter p : m.parameters()) {
+                ps.add(new Parameter(p.name(), p.value(), "1".equals(p.unit()) ? "" : p.unit()));
+            }
+            FitStatistics st = m.statistics();
+            String src = site.source().text();
+            return new StepDescription(forward ? src + " → site grid (" + site.file() + ")"
+                : "site grid (" + site.file() + ") → " + src, m.kind().id() + " fitted by least squares to "
+                + st.pointsUsed() + " control points" + (forward ? "" : ", inverse"), OptionalInt.empty(),
+                OptionalInt.empty(), ps, "site model " + site.file() + " (geotick fit)", st.rms(), List.of(
+                    "accuracy shown is the fit's RMS residual (" + String.format(Locale.ROOT, "%.4f", st.rms()) + " m"
+                        + ", redundancy " + st.redundancy() + "); valid only inside the control points' area, errors"
+                        + " grow outside it"));
+        }
+
+        @Override
+        public List<StepDescription> toEcefSteps() {
+            List<StepDescription> s = new ArrayList<>();
+            s.add(step(false));
+            s.addAll(inner.toEcefSteps());
+            return s;
+        }
+
+        @Override
+        public List<StepDescription> fromEcefSteps() {
+            List<StepDescription> s = new ArrayList<>(inner.fromEcefSteps());
+            s.add(step(true));
             return s;
         }
     }

@@ -48,7 +48,16 @@ public enum SystemKind {
     EPSG_PROJECTED("EPSG", "EPSG:n", GridAxes.E, GridAxes.N, GridAxes.H),
     /** A geographic EPSG system: latitude, longitude (degrees) and ellipsoidal height (metres). */
     EPSG_GEOGRAPHIC("EPSG", "EPSG:n", new Axis("lat", "latitude", DEGREE), new Axis("lon", "longitude", DEGREE),
-        new Axis("h", "height", METRE));
+        new Axis("h", "height", METRE)),
+    /**
+     * A site grid fitted by {@code geotick fit} (2D models): site x, y (metres) and the source system's third
+     * value passed through (its height).
+     */
+    SITE_2D("site", "site:FILE.json", new Axis("x", "site-x", METRE), new Axis("y", "site-y", METRE),
+        new Axis("h", "height", METRE)),
+    /** A site grid fitted as a 3D Helmert: site x, y, z (metres). */
+    SITE_3D("site", "site:FILE.json", new Axis("x", "site-x", METRE), new Axis("y", "site-y", METRE),
+        new Axis("z", "site-z", METRE));
 
     /** The axes of the grid kinds and the two values every grid target adds. */
     static final class GridAxes {

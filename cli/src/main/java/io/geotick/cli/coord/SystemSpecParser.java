@@ -6,6 +6,7 @@ import io.geotick.geodesy.position.GeodeticPosition;
 import io.geotick.transforms.epsg.EpsgSystem;
 import io.geotick.transforms.epsg.EpsgSystems;
 import io.geotick.transforms.epsg.UnknownEpsgCodeException;
+import io.geotick.transforms.fit.SiteModel;
 import io.geotick.transforms.frames.Frame;
 import io.geotick.transforms.frames.FrameRegistry;
 import io.geotick.transforms.frames.UnknownFrameException;
@@ -100,6 +101,8 @@ final class SystemSpecParser {
                 }
                 Frame implied = EpsgSystems.registryFrame(s, registry).orElseGet(() -> EpsgSystems.datumFrame(s));
                 return CoordinateSystemSpec.epsg(s, implied);
+            case "site":
+                return site(text, param, registry);
             default:
                 break;
         }
@@ -117,6 +120,32 @@ final class SystemSpecParser {
                 + " (latitude and longitude in degrees, height in metres)");
         }
         return CoordinateSystemSpec.local(kind, origin(text, t.substring(colon + 1)));
+    }
+
+    /** A site grid from its model file; the model's source system is parsed by the same rules. */
+    private static CoordinateSystemSpec site(String text, String file, FrameRegistry registry) {
+        if (file.isEmpty()) {
+            throw new UserInputException("coordinate system '" + text + "' needs the model file: site:FILE.json "
+                + "(written by geotick fit -o)");
+        }
+        // Unreadable file: UncheckedIOException (exit 3); invalid content: SiteModelFormatException (exit 4).
+        SiteModel m = SiteModel.read(java.nio.file.Path.of(file));
+        if (m.sourceSystem().isBlank()) {
+            throw new UserInputException("coordinate system '" + text + "': the model states no source system; fit "
+                + "it again with geotick fit --from SYS");
+        }
+        CoordinateSystemSpec source;
+        try {
+            source = parse(m.sourceSystem(), registry);
+        } catch (UserInputException e) {
+            throw new io.geotick.transforms.fit.SiteModelFormatException(file + ": source_system '" + m.sourceSystem()
+                + "' is not usable: " + e.getMessage(), e);
+        }
+        if (source.site().isPresent() || (source.kind() == SystemKind.UTM && source.grid().isEmpty())) {
+            throw new io.geotick.transforms.fit.SiteModelFormatException(file + ": source_system '" + m.sourceSystem()
+                + "' must be a fixed system (not a site grid, not utm without a zone)");
+        }
+        return CoordinateSystemSpec.site(new CoordinateSystemSpec.Site(file, m, source));
     }
 
     private static GeodeticPosition origin(String text, String params) {
