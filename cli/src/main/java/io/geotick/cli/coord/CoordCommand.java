@@ -61,6 +61,9 @@ import picocli.CommandLine.Spec;
         "                  (latitude, longitude, h) system by its EPSG code, from the",
         "                  EPSG definitions bundled with Proj4J; the code implies its",
         "                  datum (EPSG:n@FRAME names the realisation instead)",
+        "  site:FILE.json  a site grid fitted by 'geotick fit' (-o FILE.json): x, y and h",
+        "                  (2D models) or x, y, z (helmert3d), in metres; reached through",
+        "                  the model's source system (and its frame), as source or target",
         "A grid source takes E N h, or E N alone when the height is not known (it is",
         "then not printed). Grid targets also print the zone (UTM/UPS), the point",
         "scale factor and the meridian convergence (deg, true to grid north, clockwise).",
@@ -113,7 +116,7 @@ import picocli.CommandLine.Spec;
         "licensed surveyors: use their published parameters (--helmert) and grids.",
         "",
         "Exit codes: 0 ok; 2 bad usage or input (the message names the value);",
-        "  3 file not readable; 4 invalid geoid file.",
+        "  3 file not readable; 4 invalid geoid or site-model file.",
         "",
         Cautions.TEXT})
 public final class CoordCommand implements Callable<Integer> {

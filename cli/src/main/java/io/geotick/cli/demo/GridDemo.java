@@ -11,13 +11,20 @@ import io.geotick.transforms.frames.StandardFrames;
 import io.geotick.transforms.projection.GridGround;
 import io.geotick.transforms.projection.GridPosition;
 import io.geotick.transforms.projection.Utm;
+import io.geotick.transforms.fit.ControlPoint;
+import io.geotick.transforms.fit.SiteFitter;
+import io.geotick.transforms.fit.SiteModel;
+import io.geotick.transforms.fit.SitePoint;
 import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 
 /**
  * The map-grid part of the demo: the rover's fix (the datum part's, taken to ETRF2000) on UTM with its
  * scale factor and convergence, and a taped distance on the quay compared with the grid distance through
- * the combined scale factor. The fix, the quay mark and its height are invented.
+ * the combined scale factor, and a site grid fitted to four control marks. The fix, the quay mark, the
+ * control marks and the site grid are invented.
  */
 final class GridDemo implements DemoPart {
     // Invented: a mark at the end of the fictional harbour's quay, in ETRF2000, ellipsoidal height in metres.
@@ -61,6 +68,25 @@ final class GridDemo implements DemoPart {
             - grid), 1e6 * (ground - grid) / grid));
         out.println("     not the grid one; use h above the ellipsoid (an orthometric height leaves out");
         out.println("     the geoid undulation: 30 m of it is 4.7 ppm).");
+        out.println();
+
+        // Invented: four harbour control marks with their coordinates on the harbour's own site grid.
+        double[][] marks = {{354700.000, 5118150.000, 1000.004, 2999.997}, {355200.000, 5118120.000, 1500.155, 2973.498},
+            {355150.000, 5117900.000, 1451.701, 2753.169}, {354750.000, 5117950.000, 1051.386, 2800.366}};
+        List<ControlPoint> cps = new ArrayList<>();
+        for (int i = 0; i < marks.length; i++) {
+            cps.add(ControlPoint.of("H" + (i + 1), marks[i][0], marks[i][1], marks[i][2], marks[i][3]));
+        }
+        SiteModel site = SiteFitter.similarity(cps).model();
+        SitePoint r = site.apply(g.easting(), g.northing());
+        out.println("3. The harbour keeps its own site grid, tied to four control marks (invented");
+        out.println("   coordinates). A 2D similarity fitted to them by least squares (geotick fit):");
+        out.println(f("     scale %.8f, rotation %.6f deg, RMS residual %.1f mm (redundancy %d)",
+            site.parameter("scale").value(), site.parameter("rotation").value(), 1000 * site.statistics().rms(),
+            site.statistics().redundancy()));
+        out.println(f("     the rover on the site grid: x %.3f m, y %.3f m", r.x(), r.y()));
+        out.println("   Same from the command line: geotick fit --model similarity --from utm:30N@ETRF2000");
+        out.println("   -o harbour.json marks.csv, then geotick coord --to site:harbour.json ...");
     }
 
     private static String f(String format, Object... args) {

@@ -184,11 +184,11 @@ public final class FitCommand implements Callable<Integer> {
         s.append("rms          ").append(f("%.4f m", st.rms())).append(nl);
         s.append("parameters").append(nl);
         for (FitParameter p : m.parameters()) {
-            s.append(f("  %-8s %22.12f %s", p.name(), p.value(), "1".equals(p.unit()) ? "" : p.unit()).stripTrailing());
+            s.append(f("  %-9s %s %s", p.name(), sig(p.value()), "1".equals(p.unit()) ? "" : p.unit()).stripTrailing());
             s.append(p.sigma().isPresent() ? f("  ± %.3g", p.sigma().getAsDouble()) : "  ± not known").append(nl);
         }
         for (FitParameter p : m.derivedParameters()) {
-            s.append(f("  %-8s %22.12f %s", p.name(), p.value(), "1".equals(p.unit()) ? "" : p.unit()).stripTrailing())
+            s.append(f("  %-9s %s %s", p.name(), sig(p.value()), "1".equals(p.unit()) ? "" : p.unit()).stripTrailing())
                 .append(p.sigma().isPresent() ? f("  ± %.3g", p.sigma().getAsDouble()) : "").append("  (derived)")
                 .append(nl);
         }
@@ -208,6 +208,14 @@ public final class FitCommand implements Callable<Integer> {
             s.append("warning      outliers flagged; check those points or refit with --exclude-outliers").append(nl);
         }
         return s.toString();
+    }
+
+    /** 12 significant digits (the JSON report and the model file keep every digit). */
+    private static String sig(double v) {
+        if (v != 0 && Math.abs(v) < 1e-6) {
+            return f("%.3e", v);
+        }
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(12)).stripTrailingZeros().toPlainString();
     }
 
     private static String num(double v) {

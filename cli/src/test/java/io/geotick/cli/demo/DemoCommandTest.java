@@ -52,5 +52,6 @@ class DemoCommandTest {
         // convergence and a point scale below 1 inside ±180 km of it (common practice).
         assertThat(out).contains("west of true north");
         assertThat(out).containsPattern("point scale factor 0\\.9998\\d+");
+        assertThat(out).contains("site grid", "2D similarity fitted", "RMS residual", "geotick fit --model similarity");
     }
 }
