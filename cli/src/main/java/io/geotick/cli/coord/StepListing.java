@@ -59,7 +59,8 @@ public final class StepListing {
         }
         s.append(indent).append("source: ").append(d.source()).append(nl);
         s.append(indent).append("accuracy: ").append(accuracy.isEmpty() ? "not stated"
-            : accuracy.getAsDouble() == 0 ? "exact (rounding only)" : number(accuracy.getAsDouble()) + " m").append(nl);
+            : accuracy.getAsDouble() == 0 ? "exact (rounding only)" : (accuracy.getAsDouble() < 0.001
+            ? number(accuracy.getAsDouble()) : Double.toString(accuracy.getAsDouble())) + " m").append(nl);
         for (String c : d.cautions()) {
             s.append(indent).append("caution: ").append(c).append(nl);
         }
