@@ -176,7 +176,13 @@ interface SystemAdapter {
                 proj = fixed.get();
                 method = fixedMethod.orElseThrow();
             } else {
-                Utm u = Utm.forPosition(g[0], g[1], ellipsoid);
+                Utm u;
+                try {
+                    u = Utm.forPosition(g[0], g[1], ellipsoid);
+                } catch (io.geotick.transforms.projection.ProjectionDomainException e) {
+                    throw new io.geotick.transforms.projection.ProjectionDomainException(e.getMessage()
+                        + (Math.abs(g[0]) > 80 ? "; --to " + (g[0] > 0 ? "ups:N" : "ups:S") + " covers the point" : ""));
+                }
                 proj = u;
                 method = ProjectionMethod.utm(u);
             }

@@ -119,7 +119,7 @@ class CoordGridsTest {
 
         CliRun utm = coord("--from", "geodetic", "--to", "utm", "86", "20", "0");
         assertThat(utm.exitCode()).isEqualTo(2);
-        assertThat(utm.err()).contains("latitude 86.0").contains("outside the UTM limits").contains("UPS");
+        assertThat(utm.err()).contains("latitude 86.0").contains("outside the UTM limits").contains("--to ups:N");
         CliRun ups = coord("--from", "geodetic", "--to", "ups:N", "80", "3", "0");
         assertThat(ups.exitCode()).isEqualTo(2);
         assertThat(ups.err()).contains("latitude 80.0").contains("83.5");

@@ -94,7 +94,8 @@ public final class EpsgSystems {
         return s;
     }
 
-    private static EpsgSystem read(int code) {
+    /** Serialised: Proj4J's factory and its EPSG file reader make no thread-safety promise. */
+    private static synchronized EpsgSystem read(int code) {
         CoordinateReferenceSystem crs;
         try {
             crs = FACTORY.createFromName("EPSG:" + code);
