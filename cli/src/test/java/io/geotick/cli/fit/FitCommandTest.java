@@ -172,4 +172,41 @@ class FitCommandTest {
         assertThat(u.exitCode()).isEqualTo(2);
         assertThat(u.err()).contains("states no source system");
     }
+
+    @Test
+    void helmert3dExactTranslationIntoCoord(@TempDir Path dir) throws Exception {
+        // Hand-computed exact case: the site grid is ECEF shifted by (-4 406 000 + 1.5, 376 000 - 0.7,
+        // -4 580 000 + 2.1) m with no rotation and no scale (invented marks).
+        double[][] p = {{4406214.692, -376365.730, 4580724.072}, {4406514.1, -376165.2, 4580424.9},
+            {4405914.3, -376665.7, 4581024.0}, {4406314.0, -375965.0, 4580624.5}, {4406000.0, -376500.0, 4580900.0}};
+        StringBuilder s = new StringBuilder("id,x,y,z,site_x,site_y,site_z\n");
+        for (int i = 0; i < p.length; i++) {
+            s.append(String.format(Locale.ROOT, "M%d,%.3f,%.3f,%.3f,%.3f,%.3f,%.3f%n", i, p[i][0], p[i][1], p[i][2],
+                p[i][0] - 4406000 + 1.5, p[i][1] + 376000 - 0.7, p[i][2] - 4580000 + 2.1));
+        }
+        Path csv = dir.resolve("h3.csv");
+        Files.writeString(csv, s.toString());
+        Path model = dir.resolve("h3.json");
+        CliRun f = CliRun.of("fit", "--model", "helmert3d", "--from", "ecef", "-o", model.toString(), csv.toString());
+        assertThat(f.exitCode()).isZero();
+        assertThat(f.out()).contains("helmert-3d").contains("redundancy   8");
+        JsonNode m = Json.MAPPER.readTree(Files.readString(model));
+        // Source: hand-computed exact case above: scale difference and rotations zero (to 1e-6 arc-second or
+        // ppm: over the marks' ~500 m spread that is below 3 nm, the rounding of the fit).
+        for (JsonNode q : m.get("parameters")) {
+            String n = q.get("name").asText();
+            if (n.startsWith("r") || n.equals("ds")) {
+                assertThat(q.get("value").asDouble()).as(n).isCloseTo(0, within(1e-6));
+            }
+        }
+        CliRun c = CliRun.of("coord", "--from", "ecef", "--to", "site:" + model, "--json", "4406100", "-376200",
+            "4580800");
+        JsonNode j = Json.MAPPER.readTree(c.out());
+        assertThat(j.get("x").asDouble()).isCloseTo(101.5, within(1e-6));
+        assertThat(j.get("y").asDouble()).isCloseTo(-200.7, within(1e-6));
+        assertThat(j.get("z").asDouble()).isCloseTo(802.1, within(1e-6));
+        CliRun k = CliRun.of("fit", "--model", "helmert3d", "--outlier-threshold", "-1", csv.toString());
+        assertThat(k.exitCode()).isEqualTo(2);
+        assertThat(k.err()).contains("--outlier-threshold -1");
+    }
 }
