@@ -2,6 +2,7 @@ package io.geotick.cli;
 
 import io.geotick.cli.coord.CoordCommand;
 import io.geotick.cli.demo.DemoCommand;
+import io.geotick.cli.fit.FitCommand;
 import io.geotick.cli.frames.FramesCommand;
 import io.geotick.cli.time.ClockCommand;
 import io.geotick.cli.time.LeapCommand;
@@ -23,6 +24,7 @@ import picocli.CommandLine.Spec;
     subcommands = {
         CoordCommand.class,
         FramesCommand.class,
+        FitCommand.class,
         TimeCommand.class,
         LeapCommand.class,
         ClockCommand.class,

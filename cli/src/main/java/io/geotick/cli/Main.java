@@ -88,5 +88,6 @@ public final class Main {
     private static final List<Class<? extends Throwable>> DATA_FILE_FAILURES = List.of(
         DataFileException.class,
         io.geotick.timescales.leap.LeapListException.class,
-        io.geotick.transforms.grid.GridFormatException.class);
+        io.geotick.transforms.grid.GridFormatException.class,
+        io.geotick.transforms.fit.SiteModelFormatException.class);
 }

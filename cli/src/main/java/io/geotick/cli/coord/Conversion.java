@@ -9,6 +9,9 @@ import io.geotick.transforms.MissingEpochException;
 import io.geotick.transforms.StepDescription;
 import io.geotick.transforms.chain.ConversionChain;
 import io.geotick.transforms.chain.CoordinateSystem;
+import io.geotick.transforms.epsg.EpsgSystem;
+import io.geotick.transforms.epsg.EpsgSystems;
+import io.geotick.transforms.helmert.HelmertParameters;
 import io.geotick.transforms.frames.Frame;
 import io.geotick.transforms.frames.FrameKind;
 import io.geotick.transforms.frames.FrameLink;
@@ -49,6 +52,7 @@ public final class Conversion {
     private final CoordinateSystemSpec source;
     private final CoordinateSystemSpec target;
     private final Ellipsoid targetEllipsoid;
+    private final Ellipsoid sourceEllipsoid;
     private final SystemAdapter from;
     private final SystemAdapter to;
     private final List<EcefStep> steps;
@@ -56,9 +60,10 @@ public final class Conversion {
     private final List<String> warnings;
 
     private Conversion(CoordinateSystemSpec source, CoordinateSystemSpec target, SystemAdapter from,
-            SystemAdapter to, Ellipsoid targetEllipsoid, List<EcefStep> steps, Optional<Epoch> epoch,
-            List<String> warnings) {
+            SystemAdapter to, Ellipsoid sourceEllipsoid, Ellipsoid targetEllipsoid, List<EcefStep> steps,
+            Optional<Epoch> epoch, List<String> warnings) {
         this.source = source;
+        this.sourceEllipsoid = sourceEllipsoid;
         this.target = target;
         this.from = from;
         this.to = to;
@@ -121,21 +126,58 @@ public final class Conversion {
         return convert(source.kind().parseValues(texts));
     }
 
-    /** Converts one point given in the source's axis order. */
+    /**
+     * Converts one point given in the source's axis order. A grid source may leave the height unknown
+     * (NaN): it is then taken as 0 m for the computation and left out of the result, which needs a target
+     * whose third value is a height.
+     */
     public ConvertedPoint convert(double[] values) {
+        boolean heightKnown = !Double.isNaN(values[2]);
+        List<String> w = new ArrayList<>(warnings);
+        if (!heightKnown) {
+            if (!target.kind().axes().get(2).label().endsWith("height")) {
+                throw new UserInputException("'" + target + "' needs the height: give easting, northing and h (m)");
+            }
+            values = new double[] {values[0], values[1], 0};
+            if (!steps.isEmpty() || !sourceEllipsoid.equals(targetEllipsoid)) {
+                w.add("height not given: taken as 0 m and not printed; across a datum change each 100 m of"
+                    + " height error shifts the result horizontally by up to ~1 cm (the two ellipsoids' normals"
+                    + " differ by about the datum shift divided by the Earth's radius)");
+            }
+        }
         EcefPosition p = from.toEcef(values);
         for (EcefStep s : steps) {
             p = s.apply(p);
         }
-        double[] out = to.fromEcef(p);
-        List<Axis> axes = target.kind().axes();
+        double[] out;
+        List<ExplainedStep> all = new ArrayList<>();
+        from.toEcefSteps().forEach(d -> all.add(ExplainedStep.of(d)));
+        steps.forEach(s -> all.addAll(s.steps()));
+        Optional<String> zone = Optional.empty();
+        if (to instanceof SystemAdapter.Grid) {
+            SystemAdapter.Grid g = (SystemAdapter.Grid) to;
+            SystemAdapter.Grid.Result r = g.gridFromEcef(p);
+            out = r.values();
+            zone = r.zone();
+            g.fromEcefSteps(r).forEach(d -> all.add(ExplainedStep.of(d)));
+        } else {
+            out = to.fromEcef(p);
+            to.fromEcefSteps().forEach(d -> all.add(ExplainedStep.of(d)));
+        }
+        List<Axis> axes = new ArrayList<>(target.kind().axes());
+        if (target.kind().isProjected()) {
+            axes.add(SystemKind.GridAxes.SCALE);
+            axes.add(SystemKind.GridAxes.CONVERGENCE);
+        }
         List<OutputField> fields = new ArrayList<>(axes.size());
         for (int i = 0; i < axes.size(); i++) {
+            if (i == 2 && !heightKnown) {
+                continue;
+            }
             fields.add(new OutputField(axes.get(i), out[i]));
         }
-        List<ExplainedStep> all = steps();
         return new ConvertedPoint(source, target, targetEllipsoid.name(), epoch, fields, all,
-            ExplainedStep.total(all), warnings);
+            ExplainedStep.total(all), w, zone);
     }
 
     /**
@@ -167,6 +209,7 @@ public final class Conversion {
         private Optional<Epoch> epoch = Optional.empty();
         private Optional<UserHelmert> helmert = Optional.empty();
         private Optional<GeoidGrid> geoid = Optional.empty();
+        private final List<String> extraWarnings = new ArrayList<>();
 
         private Builder(CoordinateSystemSpec source, CoordinateSystemSpec target) {
             this.source = source;
@@ -214,14 +257,23 @@ public final class Conversion {
             if (geoid.isPresent()) {
                 checkGeoidUse(source, target);
             }
+            if (source.kind() == SystemKind.UTM && source.grid().isEmpty()) {
+                throw new UserInputException("'utm' as a source needs its zone (an easting and northing do not tell"
+                    + " it): write utm:ZONE, e.g. utm:31N or utm:33S");
+            }
             boolean sf = source.frame().isPresent();
             boolean tf = target.frame().isPresent();
             if (sf != tf) {
                 CoordinateSystemSpec with = sf ? source : target;
                 CoordinateSystemSpec without = sf ? target : source;
-                throw new UserInputException("'" + with + "' names a frame but '" + without + "' does not; give a"
+                throw new UserInputException("'" + with + "' " + (with.frameImplied() ? "implies frame "
+                    + with.frame().orElseThrow().name() : "names a frame") + " but '" + without + "' does not; give a"
                     + " frame at both ends (e.g. " + without + "@" + with.frame().orElseThrow().name()
                     + " for the same frame) or at neither");
+            }
+            for (CoordinateSystemSpec end : List.of(source, target)) {
+                CoordinateSystemSpec e = end.site().map(CoordinateSystemSpec.Site::source).orElse(end);
+                e.epsg().ifPresent(s -> joinEpsgDatum(e, s));
             }
             return sf ? betweenFrames(source.frame().orElseThrow(), target.frame().orElseThrow()) : geometric();
         }
@@ -236,7 +288,7 @@ public final class Conversion {
                 steps.add(chainStep(s, t));
             }
             return new Conversion(source, target, SystemAdapter.of(source, e, "--ellipsoid", geoid),
-                SystemAdapter.of(target, e, "--ellipsoid", geoid), e, steps, epoch, List.of());
+                SystemAdapter.of(target, e, "--ellipsoid", geoid), e, e, steps, epoch, List.of());
         }
 
         private Conversion betweenFrames(Frame s, Frame t) {
@@ -256,9 +308,47 @@ public final class Conversion {
             if (!c.steps().isEmpty()) {
                 steps.add(c);
             }
+            List<String> w = new ArrayList<>(extraWarnings);
+            w.addAll(warnings(c.chain));
             return new Conversion(source, target, SystemAdapter.of(source, s.ellipsoid(), s.name(), geoid),
-                SystemAdapter.of(target, t.ellipsoid(), t.name(), geoid), t.ellipsoid(), steps, epoch,
-                warnings(c.chain));
+                SystemAdapter.of(target, t.ellipsoid(), t.name(), geoid), s.ellipsoid(), t.ellipsoid(), steps, epoch,
+                w);
+        }
+
+        /**
+         * An EPSG end: its own cautions become warnings; a datum that matches no registry frame joins the
+         * registry through Proj4J's shift to WGS 84, with a warning saying so.
+         */
+        private void joinEpsgDatum(CoordinateSystemSpec end, EpsgSystem s) {
+            s.cautions().forEach(c -> addWarning(s.name() + ": " + c));
+            Frame implied = EpsgSystems.datumFrame(s);
+            if (!end.frame().orElseThrow().equals(implied) || registry.contains(implied.name())) {
+                return;
+            }
+            Optional<FrameLink> link = EpsgSystems.datumLink(s, registry);
+            if (link.isEmpty()) {
+                if (!source.frame().equals(target.frame())) {
+                    throw new UserInputException(s.name() + ": the EPSG definitions bundled with Proj4J give its datum ("
+                        + s.datumName() + ") no shift to WGS 84, and no registry frame matches it; name its frame as "
+                        + s.name() + "@FRAME (geotick frames lists them)");
+                }
+                registry = registry.toBuilder().add(implied).build();
+                return;
+            }
+            registry = registry.toBuilder().add(implied).add(link.get()).build();
+            HelmertParameters h = s.toWgs84().orElseThrow();
+            boolean zero = h.equals(HelmertParameters.ZERO) || h.equals(HelmertParameters.ofTranslation(0, 0, 0));
+            addWarning("the datum of " + s.name() + " is taken from the EPSG definitions bundled with Proj4J ("
+                + s.ellipsoid().name() + ", shift to WGS 84: " + EpsgSystems.shiftText(h) + ", accuracy not stated); no"
+                + " frame of the registry matches it" + (zero ? ". A zero shift treats the datum as WGS 84: for a"
+                + " plate-fixed datum such as ETRS89 that neglects its drift from WGS 84 (about 2.5 cm/yr since 1989)"
+                + "; name the realisation, e.g. " + s.name() + "@ETRF2000" : ""));
+        }
+
+        private void addWarning(String w) {
+            if (!extraWarnings.contains(w)) {
+                extraWarnings.add(w);
+            }
         }
 
         private ChainStep chainStep(Frame s, Frame t) {
@@ -299,8 +389,10 @@ public final class Conversion {
             this.chain = chain;
             List<ExplainedStep> l = new ArrayList<>();
             for (StepDescription d : chain.steps()) {
-                // The user's set is the chain's only step; its accuracy is what they stated, if anything.
-                l.add(user ? new ExplainedStep(d, userAccuracy) : ExplainedStep.of(d));
+                // The user's set is the chain's only step; its accuracy is what they stated, if anything. A datum
+                // shift read from Proj4J's EPSG definitions states none either.
+                l.add(user ? new ExplainedStep(d, userAccuracy) : d.name().contains("datum of EPSG:")
+                    ? new ExplainedStep(d, OptionalDouble.empty()) : ExplainedStep.of(d));
             }
             this.listed = List.copyOf(l);
         }

@@ -19,10 +19,11 @@ import java.util.OptionalDouble;
  * @param accuracyMetres the combined accuracy of the steps (root-sum-square), empty if one is not stated
  * @param warnings cautions of the published parameter sets used (e.g. WGS 84 taken as an ITRF), each with
  *     its size; empty when there are none
+ * @param zone the UTM zone ("31N") or UPS pole ("N") of a UTM/UPS target; empty otherwise
  */
 public record ConvertedPoint(CoordinateSystemSpec source, CoordinateSystemSpec system, String ellipsoid,
         Optional<Epoch> epoch, List<OutputField> values, List<ExplainedStep> steps, OptionalDouble accuracyMetres,
-        List<String> warnings) {
+        List<String> warnings, Optional<String> zone) {
     public ConvertedPoint {
         Objects.requireNonNull(source, "source");
         Objects.requireNonNull(system, "system");
@@ -32,6 +33,14 @@ public record ConvertedPoint(CoordinateSystemSpec source, CoordinateSystemSpec s
         steps = List.copyOf(steps);
         Objects.requireNonNull(accuracyMetres, "accuracyMetres");
         warnings = List.copyOf(warnings);
+        Objects.requireNonNull(zone, "zone");
+    }
+
+    /** A point without a zone. */
+    public ConvertedPoint(CoordinateSystemSpec source, CoordinateSystemSpec system, String ellipsoid,
+            Optional<Epoch> epoch, List<OutputField> values, List<ExplainedStep> steps, OptionalDouble accuracyMetres,
+            List<String> warnings) {
+        this(source, system, ellipsoid, epoch, values, steps, accuracyMetres, warnings, Optional.empty());
     }
 
     /** A point of a purely geometric conversion (no epoch, no steps listed, no warnings); source = target. */

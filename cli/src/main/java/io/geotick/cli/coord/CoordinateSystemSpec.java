@@ -1,6 +1,8 @@
 package io.geotick.cli.coord;
 
 import io.geotick.geodesy.position.GeodeticPosition;
+import io.geotick.transforms.epsg.EpsgSystem;
+import io.geotick.transforms.fit.SiteModel;
 import io.geotick.transforms.frames.Frame;
 import java.math.BigDecimal;
 import java.util.Objects;
@@ -18,16 +20,69 @@ import java.util.Optional;
  * @param kind the kind of system
  * @param origin the geodetic origin of a local frame (present exactly when {@code kind.needsOrigin()});
  *     with a frame it is a position in that frame, on its ellipsoid
- * @param frame the reference frame, if one was named
+ * @param frame the reference frame, if one was named (or implied by an EPSG code)
+ * @param grid the grid kind's parameter as written canonically: the UTM zone ("31N"), the UPS hemisphere
+ *     ("N"), the EPSG code ("27700"); empty for {@code utm} with the zone from the point, and for non-grid kinds
+ * @param epsg the EPSG system, present exactly for the EPSG kinds
+ * @param frameImplied whether the frame was implied by the EPSG code rather than named with {@code @FRAME}
+ *     (the canonical text then leaves it out)
  */
-public record CoordinateSystemSpec(SystemKind kind, Optional<GeodeticPosition> origin, Optional<Frame> frame) {
+public record CoordinateSystemSpec(SystemKind kind, Optional<GeodeticPosition> origin, Optional<Frame> frame,
+        Optional<String> grid, Optional<EpsgSystem> epsg, boolean frameImplied, Optional<Site> site) {
+
+    /**
+     * A fitted site grid: the model file as named, the model, and the system the model starts from (its
+     * frame is the site system's).
+     */
+    public record Site(String file, SiteModel model, CoordinateSystemSpec source) {
+        public Site {
+            Objects.requireNonNull(file, "file");
+            Objects.requireNonNull(model, "model");
+            Objects.requireNonNull(source, "source");
+        }
+    }
+
+    public CoordinateSystemSpec(SystemKind kind, Optional<GeodeticPosition> origin, Optional<Frame> frame,
+            Optional<String> grid, Optional<EpsgSystem> epsg, boolean frameImplied) {
+        this(kind, origin, frame, grid, epsg, frameImplied, Optional.empty());
+    }
+
+    /** A site grid: the frame is the model's source system's, implied. */
+    public static CoordinateSystemSpec site(Site s) {
+        return new CoordinateSystemSpec(s.model().kind().dimension() == 3 ? SystemKind.SITE_3D : SystemKind.SITE_2D,
+            Optional.empty(), s.source().frame(), Optional.of(s.file()), Optional.empty(), true, Optional.of(s));
+    }
+
     public CoordinateSystemSpec {
         Objects.requireNonNull(kind, "kind");
         Objects.requireNonNull(origin, "origin");
         Objects.requireNonNull(frame, "frame");
+        Objects.requireNonNull(grid, "grid");
+        Objects.requireNonNull(epsg, "epsg");
+        Objects.requireNonNull(site, "site");
         if (kind.needsOrigin() != origin.isPresent()) {
             throw new IllegalArgumentException(kind.word() + (kind.needsOrigin() ? " needs" : " takes no") + " origin");
         }
+        boolean isEpsg = kind == SystemKind.EPSG_PROJECTED || kind == SystemKind.EPSG_GEOGRAPHIC;
+        if (isEpsg != epsg.isPresent() || (grid.isPresent() && !kind.isGrid())) {
+            throw new IllegalArgumentException(kind.word() + ": grid parameter or EPSG system does not fit the kind");
+        }
+    }
+
+    /** A non-grid system. */
+    public CoordinateSystemSpec(SystemKind kind, Optional<GeodeticPosition> origin, Optional<Frame> frame) {
+        this(kind, origin, frame, Optional.empty(), Optional.empty(), false);
+    }
+
+    /** A grid system ({@code utm}, {@code utm:31N}, {@code ups:N}) without a frame. */
+    public static CoordinateSystemSpec grid(SystemKind kind, Optional<String> parameter) {
+        return new CoordinateSystemSpec(kind, Optional.empty(), Optional.empty(), parameter, Optional.empty(), false);
+    }
+
+    /** An EPSG system with the frame its datum implies. */
+    public static CoordinateSystemSpec epsg(EpsgSystem s, Frame implied) {
+        return new CoordinateSystemSpec(s.isProjected() ? SystemKind.EPSG_PROJECTED : SystemKind.EPSG_GEOGRAPHIC,
+            Optional.empty(), Optional.of(implied), Optional.of(Integer.toString(s.code())), Optional.of(s), true);
     }
 
     /** A system without parameters (geodetic, ecef) and without a frame. */
@@ -42,7 +97,7 @@ public record CoordinateSystemSpec(SystemKind kind, Optional<GeodeticPosition> o
 
     /** The same system in the given reference frame. */
     public CoordinateSystemSpec withFrame(Frame f) {
-        return new CoordinateSystemSpec(kind, origin, Optional.of(f));
+        return new CoordinateSystemSpec(kind, origin, Optional.of(f), grid, epsg, false, site);
     }
 
     /**
@@ -60,8 +115,8 @@ public record CoordinateSystemSpec(SystemKind kind, Optional<GeodeticPosition> o
      */
     public String text() {
         String base = origin.map(o -> kind.word() + ":" + plain(o.latitude()) + "," + plain(o.longitude()) + ","
-            + plain(o.height())).orElse(kind.word());
-        return frame.map(f -> base + "@" + f.name()).orElse(base);
+            + plain(o.height())).orElse(kind.word() + grid.map(g -> ":" + g).orElse(""));
+        return frame.filter(f -> !frameImplied).map(f -> base + "@" + f.name()).orElse(base);
     }
 
     @Override

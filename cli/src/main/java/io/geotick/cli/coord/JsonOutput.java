@@ -7,7 +7,8 @@ import io.geotick.cli.Json;
 /**
  * Renders a {@link ConvertedPoint} as one JSON object: the target's values as top-level number fields
  * under their keys ({@code lat, lon, h} | {@code lat, lon, H} | {@code x, y, z} | {@code e, n, u} |
- * {@code n, e, d} | {@code az, el, range}), then {@code "system"} (the canonical SYS text of the target),
+ * {@code n, e, d} | {@code az, el, range} | {@code easting, northing, h} (h only when known), then for grid
+ * targets {@code zone} (UTM/UPS: "31N", "N"), {@code scale} and {@code convergence} (degrees)), then {@code "system"} (the canonical SYS text of the target),
  * {@code "ellipsoid"} (its name), {@code "from"} and {@code "to"} (the canonical SYS texts),
  * {@code "epoch"} (decimal year, or null when none was given), {@code "warnings"} (only when there are
  * any) and, with {@code --explain}, {@code "steps"} (see {@link StepListing#json}) and {@code "accuracy_m"}
@@ -31,6 +32,9 @@ public final class JsonOutput {
     public static ObjectNode toJson(ConvertedPoint p, boolean explain) {
         ObjectNode o = Json.object();
         for (OutputField f : p.values()) {
+            if (f.axis() == SystemKind.GridAxes.SCALE) {
+                p.zone().ifPresent(z -> o.put("zone", z));
+            }
             o.put(f.axis().key(), f.value());
         }
         o.put("system", p.system().text());

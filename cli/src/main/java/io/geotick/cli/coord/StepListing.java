@@ -26,7 +26,7 @@ public final class StepListing {
             return "not stated";
         }
         double v = a.getAsDouble();
-        return v == 0 ? "exact (rounding only)" : String.format(Locale.ROOT, "%.3f m", v);
+        return v == 0 ? "exact (rounding only)" : v < 0.001 ? number(v) + " m" : String.format(Locale.ROOT, "%.3f m", v);
     }
 
     /** The numbered listing, each line ending in a line separator. */
@@ -59,7 +59,8 @@ public final class StepListing {
         }
         s.append(indent).append("source: ").append(d.source()).append(nl);
         s.append(indent).append("accuracy: ").append(accuracy.isEmpty() ? "not stated"
-            : accuracy.getAsDouble() == 0 ? "exact (rounding only)" : accuracy.getAsDouble() + " m").append(nl);
+            : accuracy.getAsDouble() == 0 ? "exact (rounding only)" : (accuracy.getAsDouble() < 0.001
+            ? number(accuracy.getAsDouble()) : Double.toString(accuracy.getAsDouble())) + " m").append(nl);
         for (String c : d.cautions()) {
             s.append(indent).append("caution: ").append(c).append(nl);
         }

@@ -10,6 +10,18 @@ import io.geotick.geodesy.position.EcefPosition;
 import io.geotick.geodesy.position.GeodeticPosition;
 import io.geotick.transforms.StepDescription;
 import io.geotick.transforms.StepDescription.Parameter;
+import io.geotick.transforms.epsg.EpsgSystem;
+import io.geotick.transforms.epsg.ProjectionMethod;
+import io.geotick.transforms.fit.FitParameter;
+import io.geotick.transforms.fit.FitStatistics;
+import io.geotick.transforms.fit.SiteModel;
+import io.geotick.transforms.fit.SitePoint;
+import io.geotick.transforms.fit.SiteTransform;
+import io.geotick.transforms.projection.GridPosition;
+import io.geotick.transforms.projection.Hemisphere;
+import io.geotick.transforms.projection.MapProjection;
+import io.geotick.transforms.projection.Ups;
+import io.geotick.transforms.projection.Utm;
 import io.geotick.transforms.height.GeoidGrid;
 import io.geotick.transforms.height.Interpolation;
 import java.util.ArrayList;
@@ -27,8 +39,8 @@ import java.util.OptionalInt;
  * <p>Each adapter also says what it does as {@link StepDescription}s (for {@code --explain}); those are
  * exact conversions (accuracy 0: rounding only) except where a model enters (the geoid).
  *
- * <p>A projected grid system, when added, is one more adapter: grid → geodetic → ECEF and back, with
- * its projection step described the same way.
+ * <p>A projected grid system ({@link Grid}) is one more adapter: grid → geodetic → ECEF and back, with
+ * its projection step described the same way (method, EPSG method code, parameters, accuracy).
  */
 interface SystemAdapter {
     /** The point's ECEF position. */
@@ -63,6 +75,17 @@ interface SystemAdapter {
             case NED:
             case AER:
                 return new Local(spec.kind(), spec.origin().orElseThrow(), ellipsoid, where);
+            case EPSG_GEOGRAPHIC:
+                return new Geodetic(ellipsoid, where);
+            case UTM:
+            case UPS:
+            case EPSG_PROJECTED:
+                return new Grid(spec, ellipsoid, where);
+            case SITE_2D:
+            case SITE_3D: {
+                CoordinateSystemSpec.Site s = spec.site().orElseThrow();
+                return new SiteGrid(s, of(s.source(), ellipsoid, where, geoid));
+            }
             default:
                 throw new IllegalStateException("no adapter for " + spec.kind());
         }
@@ -74,6 +97,200 @@ interface SystemAdapter {
             + where + ")", "Geographic/geocentric conversion", OptionalInt.of(9602), OptionalInt.empty(),
             List.of(new Parameter("a", e.semiMajorAxis(), "m"), new Parameter("1/f", e.inverseFlattening(), "")),
             "IOGP Guidance Note 7-2, §4.1.1; ellipsoid " + e.name() + " (" + e.source() + ")", 0, List.of());
+    }
+
+    /**
+     * A map grid: easting, northing and h ↔ geodetic on the ellipsoid ↔ ECEF. As a target it also gives the
+     * point scale and the meridian convergence ({@link #gridFromEcef}), and for UTM/UPS the zone. For
+     * {@code utm} without a zone the zone is chosen from each point (Norway and Svalbard rules included);
+     * such a system can only be a target.
+     */
+    final class Grid implements SystemAdapter {
+        private final CoordinateSystemSpec spec;
+        private final Ellipsoid ellipsoid;
+        private final Geodetic geodetic;
+        private final Optional<MapProjection> fixed;
+        private final Optional<ProjectionMethod> fixedMethod;
+
+        /** A grid point: E, N, h (NaN when unknown), k, γ; the zone name for UTM/UPS; the projection used. */
+        record Result(double[] values, Optional<String> zone, String projectionName, ProjectionMethod method) {
+        }
+
+        Grid(CoordinateSystemSpec spec, Ellipsoid ellipsoid, String where) {
+            this.spec = spec;
+            this.ellipsoid = ellipsoid;
+            this.geodetic = new Geodetic(ellipsoid, where);
+            switch (spec.kind()) {
+                case UTM:
+                    if (spec.grid().isPresent()) {
+                        Utm u = Utm.parse(spec.grid().get(), ellipsoid);
+                        fixed = Optional.of(u);
+                        fixedMethod = Optional.of(ProjectionMethod.utm(u));
+                    } else {
+                        fixed = Optional.empty();
+                        fixedMethod = Optional.empty();
+                    }
+                    break;
+                case UPS: {
+                    Ups u = Ups.of(Hemisphere.parse(spec.grid().orElseThrow()), ellipsoid);
+                    fixed = Optional.of(u);
+                    fixedMethod = Optional.of(ProjectionMethod.ups(u));
+                    break;
+                }
+                default: {
+                    EpsgSystem s = spec.epsg().orElseThrow();
+                    fixed = s.projection();
+                    fixedMethod = s.method();
+                }
+            }
+        }
+
+        /** Whether the zone comes from each point ({@code utm} without a zone). */
+        boolean automaticZone() {
+            return fixed.isEmpty();
+        }
+
+        private String gridName(MapProjection p) {
+            return spec.epsg().map(s -> s.name() + " grid").orElse(p.name());
+        }
+
+        @Override
+        public EcefPosition toEcef(double[] v) {
+            MapProjection p = fixed.orElseThrow(() -> new io.geotick.cli.UserInputException("'utm' as a source "
+                + "needs its zone: write utm:ZONE, e.g. utm:31N"));
+            GeodeticPosition g = p.unproject(v[0], v[1]);
+            return geodetic.toEcef(new double[] {g.latitude(), g.longitude(), v[2]});
+        }
+
+        @Override
+        public double[] fromEcef(EcefPosition p) {
+            return gridFromEcef(p).values();
+        }
+
+        /** The grid values E, N, h, k, γ of a position, with the zone for UTM/UPS. */
+        Result gridFromEcef(EcefPosition p) {
+            double[] g = geodetic.fromEcef(p);
+            MapProjection proj;
+            ProjectionMethod method;
+            if (fixed.isPresent()) {
+                proj = fixed.get();
+                method = fixedMethod.orElseThrow();
+            } else {
+                Utm u;
+                try {
+                    u = Utm.forPosition(g[0], g[1], ellipsoid);
+                } catch (io.geotick.transforms.projection.ProjectionDomainException e) {
+                    throw new io.geotick.transforms.projection.ProjectionDomainException(e.getMessage()
+                        + (Math.abs(g[0]) > 80 ? "; --to " + (g[0] > 0 ? "ups:N" : "ups:S") + " covers the point" : ""));
+                }
+                proj = u;
+                method = ProjectionMethod.utm(u);
+            }
+            GridPosition gp = proj.project(g[0], g[1]);
+            Optional<String> zone = proj instanceof Utm ? Optional.of(((Utm) proj).zoneName())
+                : proj instanceof Ups ? Optional.of(String.valueOf(((Ups) proj).hemisphere().letter()))
+                : Optional.empty();
+            return new Result(new double[] {gp.easting(), gp.northing(), g[2], gp.scale(), gp.convergence()}, zone,
+                gridName(proj), method);
+        }
+
+        private static StepDescription step(boolean forward, String gridName, ProjectionMethod m) {
+            return new StepDescription(forward ? "geodetic → " + gridName : gridName + " → geodetic",
+                m.method() + (forward ? "" : ", inverse"), m.epsgMethod(), OptionalInt.empty(), m.parameters(),
+                m.source(), m.accuracyMetres(), m.cautions());
+        }
+
+        @Override
+        public List<StepDescription> toEcefSteps() {
+            MapProjection p = fixed.orElseThrow();
+            List<StepDescription> s = new ArrayList<>();
+            s.add(step(false, gridName(p), fixedMethod.orElseThrow()));
+            s.addAll(geodetic.toEcefSteps());
+            return s;
+        }
+
+        @Override
+        public List<StepDescription> fromEcefSteps() {
+            List<StepDescription> s = new ArrayList<>(geodetic.fromEcefSteps());
+            if (fixed.isPresent()) {
+                s.add(step(true, gridName(fixed.get()), fixedMethod.orElseThrow()));
+            } else {
+                s.add(new StepDescription("geodetic → UTM, zone from the point", ProjectionMethod.utm(Utm.zone(31,
+                    Hemisphere.NORTH)).method().replace(" (UTM zone 31N)", ""), OptionalInt.of(9807),
+                    OptionalInt.empty(), List.of(), "UTM zone rules incl. the Norway and Svalbard exceptions (common"
+                    + " practice)", 5e-9, List.of(ProjectionMethod.TM_ACCURACY)));
+            }
+            return s;
+        }
+
+        /** The steps of {@link #gridFromEcef} for one point (the zone it fell in). */
+        List<StepDescription> fromEcefSteps(Result r) {
+            List<StepDescription> s = new ArrayList<>(geodetic.fromEcefSteps());
+            s.add(step(true, r.projectionName(), r.method()));
+            return s;
+        }
+    }
+
+    /**
+     * A site grid fitted by {@code geotick fit}: the model's source system (its own adapter), then the
+     * fitted model on its first two values (2D, the third passed through) or all three (Helmert); as a
+     * source, the model's inverse (exact to rounding) and then the source system.
+     */
+    final class SiteGrid implements SystemAdapter {
+        private final CoordinateSystemSpec.Site site;
+        private final SystemAdapter inner;
+        private final SiteTransform inverse;
+
+        SiteGrid(CoordinateSystemSpec.Site site, SystemAdapter inner) {
+            this.site = site;
+            this.inner = inner;
+            this.inverse = site.model().inverse();
+        }
+
+        @Override
+        public EcefPosition toEcef(double[] v) {
+            SitePoint s = inverse.apply(v[0], v[1], v[2]);
+            return inner.toEcef(new double[] {s.x(), s.y(), s.z()});
+        }
+
+        @Override
+        public double[] fromEcef(EcefPosition p) {
+            double[] v = inner instanceof Grid ? ((Grid) inner).gridFromEcef(p).values() : inner.fromEcef(p);
+            SitePoint s = site.model().apply(v[0], v[1], v[2]);
+            return new double[] {s.x(), s.y(), s.z()};
+        }
+
+        private StepDescription step(boolean forward) {
+            SiteModel m = site.model();
+            List<Parameter> ps = new ArrayList<>();
+            for (FitParameter p : m.parameters()) {
+                ps.add(new Parameter(p.name(), p.value(), "1".equals(p.unit()) ? "" : p.unit()));
+            }
+            FitStatistics st = m.statistics();
+            String src = site.source().text();
+            return new StepDescription(forward ? src + " → site grid (" + site.file() + ")"
+                : "site grid (" + site.file() + ") → " + src, m.kind().id() + " fitted by least squares to "
+                + st.pointsUsed() + " control points" + (forward ? "" : ", inverse"), OptionalInt.empty(),
+                OptionalInt.empty(), ps, "site model " + site.file() + " (geotick fit)", st.rms(), List.of(
+                    "accuracy shown is the fit's RMS residual (" + String.format(Locale.ROOT, "%.4f", st.rms()) + " m"
+                        + ", redundancy " + st.redundancy() + "); valid only inside the control points' area, errors"
+                        + " grow outside it"));
+        }
+
+        @Override
+        public List<StepDescription> toEcefSteps() {
+            List<StepDescription> s = new ArrayList<>();
+            s.add(step(false));
+            s.addAll(inner.toEcefSteps());
+            return s;
+        }
+
+        @Override
+        public List<StepDescription> fromEcefSteps() {
+            List<StepDescription> s = new ArrayList<>(inner.fromEcefSteps());
+            s.add(step(true));
+            return s;
+        }
     }
 
     /** Geodetic latitude, longitude, ellipsoidal height. */

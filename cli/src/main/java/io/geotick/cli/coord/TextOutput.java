@@ -16,7 +16,19 @@ import java.util.List;
  * </pre>
  * The first word of each line is a fixed label, so a script can pick a value by its label. An
  * {@code epoch} line follows {@code ellipsoid} when a coordinate epoch was given, and one {@code warning}
- * line per caution of the parameter sets used comes last.
+ * line per caution of the parameter sets used comes last. Grid targets add a {@code zone} line (UTM/UPS)
+ * after {@code ellipsoid}, and {@code scale} (unitless, 10 decimals) and {@code convergence} (deg) lines
+ * after the values; a height that is not known (easting and northing given without h) has no line.
+ * <pre>
+ * system       utm
+ * ellipsoid    WGS 84
+ * zone         31N
+ * easting       534325.167455 m
+ * northing     5761156.235699 m
+ * height            45.000000 m
+ * scale              0.9996... 
+ * convergence        0.39... deg
+ * </pre>
  */
 public final class TextOutput {
     private TextOutput() {
@@ -28,6 +40,7 @@ public final class TextOutput {
         rows.add(new String[] {"system", p.system().text()});
         rows.add(new String[] {"ellipsoid", p.ellipsoid()});
         p.epoch().ifPresent(e -> rows.add(new String[] {"epoch", e.toString()}));
+        p.zone().ifPresent(z -> rows.add(new String[] {"zone", z}));
         int width = "ellipsoid".length();
         int intWidth = 0;
         List<String> numbers = new ArrayList<>();
@@ -41,7 +54,7 @@ public final class TextOutput {
             OutputField f = p.values().get(i);
             String s = numbers.get(i);
             rows.add(new String[] {f.axis().label(),
-                " ".repeat(intWidth - s.indexOf('.')) + s + " " + f.axis().unit().symbol()});
+                (" ".repeat(intWidth - s.indexOf('.')) + s + " " + f.axis().unit().symbol()).stripTrailing()});
         }
         for (String w : p.warnings()) {
             rows.add(new String[] {"warning", w});

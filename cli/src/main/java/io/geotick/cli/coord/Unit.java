@@ -12,7 +12,9 @@ public enum Unit {
     /** Degrees of arc; 11 decimals (1e-11° ≈ 1.1 µm along a meridian). */
     DEGREE("deg", 11),
     /** Metres; 6 decimals (1 µm). */
-    METRE("m", 6);
+    METRE("m", 6),
+    /** A unitless factor (point scale); 10 decimals (0.1 mm in 1 000 km). */
+    FACTOR("", 10);
 
     private final String symbol;
     private final int textDecimals;

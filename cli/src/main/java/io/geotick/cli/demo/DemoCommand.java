@@ -24,6 +24,7 @@ public final class DemoCommand implements Callable<Integer> {
         return List.of(
             new GeodesyDemo(),
             new DatumDemo(),
+            new GridDemo(),
             new DemoPart() {
                 @Override
                 public String title() {

@@ -299,7 +299,7 @@ class CoordCommandTest {
             Arguments.of(new String[] {"--from", "geodetic", "--to", "ecef", "1", "2", ""}, "height is empty"),
             Arguments.of(new String[] {"--from", "foo", "--to", "ecef", "1", "2", "3"},
                 "unknown coordinate system 'foo'; known: geodetic, ecef, enu:LAT,LON,H, ned:LAT,LON,H, aer:LAT,LON,H"),
-            Arguments.of(new String[] {"--from", "ecef", "--to", "utm", "1", "2", "3"}, "unknown coordinate system 'utm'"),
+            Arguments.of(new String[] {"--from", "ecef", "--to", "polar", "1", "2", "3"}, "unknown coordinate system 'polar'"),
             Arguments.of(new String[] {"--from", "geodetic", "--to", "ecef", "--ellipsoid", "Mars", "1", "2", "3"},
                 "unknown ellipsoid 'Mars'"),
             Arguments.of(new String[] {"--from", "enu", "--to", "ecef", "1", "2", "3"}, "'enu' needs its origin"),

@@ -34,7 +34,7 @@ class SystemSpecParserTest {
         assertThatThrownBy(() -> CoordinateSystemSpec.parse("polar"))
             .isInstanceOf(UserInputException.class)
             .hasMessage("unknown coordinate system 'polar'; known: geodetic, ecef, enu:LAT,LON,H, ned:LAT,LON,H, "
-                + "aer:LAT,LON,H, geodetic-orthometric");
+                + "aer:LAT,LON,H, geodetic-orthometric, utm[:ZONE], ups:N|S, EPSG:n, site:FILE.json");
         assertThatThrownBy(() -> CoordinateSystemSpec.parse("")).hasMessageContaining("empty");
         assertThatThrownBy(() -> CoordinateSystemSpec.parse("aer")).hasMessageContaining("'aer' needs its origin");
         assertThatThrownBy(() -> CoordinateSystemSpec.parse("ecef:1,2,3")).hasMessageContaining("takes no parameters");

@@ -42,4 +42,16 @@ class DemoCommandTest {
         assertThat(out).contains("coordinate-frame rotation", "reference epoch", "steps: 2", "source: EUREF");
         assertThat(out).contains("geotick coord --from ecef@ITRF2020 --to geodetic@ETRF2000");
     }
+
+    @Test
+    void gridPartShowsUtmScaleConvergenceAndGroundDistance() {
+        String out = CliRun.of("demo").out();
+        assertThat(out).contains("Map grids", "UTM zone 30N", "point scale factor", "convergence",
+            "combined factor", "ground distance", "invented");
+        // The fix lies west of zone 30's central meridian (3°W) in the northern hemisphere: negative
+        // convergence and a point scale below 1 inside ±180 km of it (common practice).
+        assertThat(out).contains("west of true north");
+        assertThat(out).containsPattern("point scale factor 0\\.9998\\d+");
+        assertThat(out).contains("site grid", "2D similarity fitted", "RMS residual", "geotick fit --model similarity");
+    }
 }
