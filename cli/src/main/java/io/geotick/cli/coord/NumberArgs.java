@@ -1,6 +1,8 @@
 package io.geotick.cli.coord;
 
 import io.geotick.cli.UserInputException;
+import io.geotick.geodesy.InvalidCoordinateException;
+import io.geotick.geodesy.angle.Angles;
 import java.util.regex.Pattern;
 
 /**
@@ -43,20 +45,33 @@ public final class NumberArgs {
     }
 
     /**
-     * An angle in degrees.
+     * An angle in degrees: this is the one place where angle text is read.
      *
-     * <p>DMS PLUG-IN POINT: this is the one place where angle text is read. Today it takes decimal
-     * degrees only; when the geodesy module's angle parser (degrees-minutes-seconds with hemisphere
-     * letters) lands, call it here and keep the {@link UserInputException} wrapping so the message still
-     * names the argument. Range checks (latitude within ±90°) stay with the position types.
+     * <p>Plain decimal degrees are read here; a latitude or longitude written with degree, minute or
+     * second marks or a hemisphere letter ({@code 51°28'38.5"N}, {@code 0 00 05.3 W}) goes to the geodesy
+     * module's parser ({@link Angles}), whose message is kept and prefixed with the argument's name.
+     * Range checks of decimal values (latitude within ±90°) stay with the position types.
      *
      * @param name what the value is, for the message
      * @param text the text as typed
      * @throws UserInputException if the text is not an angle
      */
     public static double angle(String name, String text) {
+        if (text != null && DMS_LOOK.matcher(text.strip()).find()) {
+            boolean lat = name.contains("latitude");
+            if (lat || name.contains("longitude")) {
+                try {
+                    return lat ? Angles.parseLatitude(text) : Angles.parseLongitude(text);
+                } catch (InvalidCoordinateException e) {
+                    throw new UserInputException(name + ": " + e.getMessage(), e);
+                }
+            }
+        }
         return decimal(name, text);
     }
+
+    /** Text that looks like DMS or carries a hemisphere letter, rather than a plain decimal. */
+    private static final Pattern DMS_LOOK = Pattern.compile("[°'\"′″]|\\d\\s*[NSEW]$|^[NSEW]|\\d\\s+\\d|\\d[dms]");
 
     /**
      * A length in metres (a height, a Cartesian coordinate, a range).
