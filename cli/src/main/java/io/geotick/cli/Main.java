@@ -1,6 +1,8 @@
 package io.geotick.cli;
 
 import java.io.IOException;
+import java.io.OutputStreamWriter;
+import java.nio.charset.StandardCharsets;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
 import java.util.List;
@@ -18,7 +20,13 @@ public final class Main {
     }
 
     public static void main(String[] args) {
-        System.exit(run(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
+        // UTF-8 whatever the platform default, so degree signs and arrows in messages survive.
+        PrintWriter out = new PrintWriter(new OutputStreamWriter(System.out, StandardCharsets.UTF_8), true);
+        PrintWriter err = new PrintWriter(new OutputStreamWriter(System.err, StandardCharsets.UTF_8), true);
+        int code = run(args, out, err);
+        out.flush();
+        err.flush();
+        System.exit(code);
     }
 
     /** Runs geotick with the given arguments and streams; returns the exit code. Used by the tests. */
