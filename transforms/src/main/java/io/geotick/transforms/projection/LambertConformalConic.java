@@ -2,7 +2,6 @@ package io.geotick.transforms.projection;
 
 import io.geotick.geodesy.angle.DegreeTrig;
 import io.geotick.geodesy.ellipsoid.Ellipsoid;
-import io.geotick.geodesy.position.GeodeticPosition;
 import java.util.Objects;
 
 /**
@@ -28,7 +27,7 @@ import java.util.Objects;
  * (below 1 nm for the distances of a national grid). Domain: latitudes strictly between the poles (the
  * apex pole has infinite scale, the other lies at infinity); longitudes within 180° of λ₀.
  */
-public final class LambertConformalConic implements MapProjection {
+public final class LambertConformalConic extends KernelProjection {
     private final Ellipsoid ellipsoid;
     private final double longitudeOfOrigin;
     private final double falseEasting;
@@ -163,48 +162,7 @@ public final class LambertConformalConic implements MapProjection {
     }
 
     @Override
-    public GridPosition project(double latitude, double longitude) {
-        double[] buf = new double[4];
-        forward(latitude, longitude, buf, 0, true);
-        return new GridPosition(buf[0], buf[1], buf[2], buf[3]);
-    }
-
-    @Override
-    public GeodeticPosition unproject(double easting, double northing) {
-        double[] buf = new double[2];
-        inverse(easting, northing, buf, 0);
-        return GeodeticPosition.of(buf[0], buf[1]);
-    }
-
-    @Override
-    public void project(double[] src, int srcOff, double[] dst, int dstOff, int count) {
-        Checks.arrays(src, srcOff, dst, dstOff, count);
-        for (int i = 0; i < count; i++) {
-            double lat = src[srcOff + 2 * i];
-            double lon = src[srcOff + 2 * i + 1];
-            try {
-                forward(lat, lon, dst, dstOff + 2 * i, false);
-            } catch (ProjectionDomainException e) {
-                throw Checks.atIndex(i, e);
-            }
-        }
-    }
-
-    @Override
-    public void unproject(double[] src, int srcOff, double[] dst, int dstOff, int count) {
-        Checks.arrays(src, srcOff, dst, dstOff, count);
-        for (int i = 0; i < count; i++) {
-            double e = src[srcOff + 2 * i];
-            double nn = src[srcOff + 2 * i + 1];
-            try {
-                inverse(e, nn, dst, dstOff + 2 * i);
-            } catch (ProjectionDomainException ex) {
-                throw Checks.atIndex(i, ex);
-            }
-        }
-    }
-
-    private void forward(double latitude, double longitude, double[] out, int off, boolean full) {
+    void forward(double latitude, double longitude, double[] out, int off, boolean full) {
         Checks.latitude(latitude);
         Checks.longitude(longitude);
         if (Math.abs(latitude) == 90.0) {
@@ -228,7 +186,8 @@ public final class LambertConformalConic implements MapProjection {
         }
     }
 
-    private void inverse(double easting, double northing, double[] out, int off) {
+    @Override
+    void inverse(double easting, double northing, double[] out, int off) {
         Checks.grid(easting, northing);
         double dx = easting - falseEasting;
         double dy = r0 - (northing - falseNorthing);

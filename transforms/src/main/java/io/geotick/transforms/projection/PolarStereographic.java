@@ -2,7 +2,6 @@ package io.geotick.transforms.projection;
 
 import io.geotick.geodesy.angle.DegreeTrig;
 import io.geotick.geodesy.ellipsoid.Ellipsoid;
-import io.geotick.geodesy.position.GeodeticPosition;
 import java.util.Objects;
 
 /**
@@ -22,7 +21,7 @@ import java.util.Objects;
  * Accuracy: closed formulas, rounding only (below 1 nm). Domain: every latitude except the opposite
  * pole, which lies at infinity.
  */
-public final class PolarStereographic implements MapProjection {
+public final class PolarStereographic extends KernelProjection {
     private final Ellipsoid ellipsoid;
     private final Hemisphere pole;
     private final double longitudeOfOrigin;
@@ -108,47 +107,6 @@ public final class PolarStereographic implements MapProjection {
     }
 
     @Override
-    public GridPosition project(double latitude, double longitude) {
-        double[] buf = new double[4];
-        forward(latitude, longitude, buf, 0, true);
-        return new GridPosition(buf[0], buf[1], buf[2], buf[3]);
-    }
-
-    @Override
-    public GeodeticPosition unproject(double easting, double northing) {
-        double[] buf = new double[2];
-        inverse(easting, northing, buf, 0);
-        return GeodeticPosition.of(buf[0], buf[1]);
-    }
-
-    @Override
-    public void project(double[] src, int srcOff, double[] dst, int dstOff, int count) {
-        Checks.arrays(src, srcOff, dst, dstOff, count);
-        for (int i = 0; i < count; i++) {
-            double lat = src[srcOff + 2 * i];
-            double lon = src[srcOff + 2 * i + 1];
-            try {
-                forward(lat, lon, dst, dstOff + 2 * i, false);
-            } catch (ProjectionDomainException e) {
-                throw Checks.atIndex(i, e);
-            }
-        }
-    }
-
-    @Override
-    public void unproject(double[] src, int srcOff, double[] dst, int dstOff, int count) {
-        Checks.arrays(src, srcOff, dst, dstOff, count);
-        for (int i = 0; i < count; i++) {
-            double e = src[srcOff + 2 * i];
-            double n = src[srcOff + 2 * i + 1];
-            try {
-                inverse(e, n, dst, dstOff + 2 * i);
-            } catch (ProjectionDomainException ex) {
-                throw Checks.atIndex(i, ex);
-            }
-        }
-    }
-
     void forward(double latitude, double longitude, double[] out, int off, boolean full) {
         Checks.latitude(latitude);
         Checks.longitude(longitude);
@@ -177,6 +135,7 @@ public final class PolarStereographic implements MapProjection {
         }
     }
 
+    @Override
     void inverse(double easting, double northing, double[] out, int off) {
         Checks.grid(easting, northing);
         double de = easting - falseEasting;

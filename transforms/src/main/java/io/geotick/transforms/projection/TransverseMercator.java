@@ -2,7 +2,6 @@ package io.geotick.transforms.projection;
 
 import io.geotick.geodesy.angle.DegreeTrig;
 import io.geotick.geodesy.ellipsoid.Ellipsoid;
-import io.geotick.geodesy.position.GeodeticPosition;
 import java.util.Objects;
 
 /**
@@ -39,7 +38,7 @@ import java.util.Objects;
  *
  * <p>The degree ↔ radian steps use {@link DegreeTrig} (exact degree reduction).
  */
-public final class TransverseMercator implements MapProjection {
+public final class TransverseMercator extends KernelProjection {
     /** The largest |η'| accepted: the series' error stays below 0.2 µm up to here. */
     public static final double MAX_ETA_PRIME = 1.0;
 
@@ -174,52 +173,11 @@ public final class TransverseMercator implements MapProjection {
         return latitudeOfOrigin;
     }
 
-    @Override
-    public GridPosition project(double latitude, double longitude) {
-        double[] buf = new double[4];
-        forward(latitude, longitude, buf, 0, true);
-        return new GridPosition(buf[0], buf[1], buf[2], buf[3]);
-    }
-
-    @Override
-    public GeodeticPosition unproject(double easting, double northing) {
-        double[] buf = new double[2];
-        inverse(easting, northing, buf, 0);
-        return GeodeticPosition.of(buf[0], buf[1]);
-    }
-
-    @Override
-    public void project(double[] src, int srcOff, double[] dst, int dstOff, int count) {
-        Checks.arrays(src, srcOff, dst, dstOff, count);
-        for (int i = 0; i < count; i++) {
-            double lat = src[srcOff + 2 * i];
-            double lon = src[srcOff + 2 * i + 1];
-            try {
-                forward(lat, lon, dst, dstOff + 2 * i, false);
-            } catch (ProjectionDomainException e) {
-                throw Checks.atIndex(i, e);
-            }
-        }
-    }
-
-    @Override
-    public void unproject(double[] src, int srcOff, double[] dst, int dstOff, int count) {
-        Checks.arrays(src, srcOff, dst, dstOff, count);
-        for (int i = 0; i < count; i++) {
-            double e = src[srcOff + 2 * i];
-            double n = src[srcOff + 2 * i + 1];
-            try {
-                inverse(e, n, dst, dstOff + 2 * i);
-            } catch (ProjectionDomainException ex) {
-                throw Checks.atIndex(i, ex);
-            }
-        }
-    }
-
     /**
      * Forward into out[off] = E, out[off+1] = N and, when {@code full}, out[off+2] = k, out[off+3] = γ
      * (degrees). out[off], out[off+1] serve as scratch first. Package-private for UTM.
      */
+    @Override
     void forward(double latitude, double longitude, double[] out, int off, boolean full) {
         Checks.latitude(latitude);
         Checks.longitude(longitude);
@@ -321,6 +279,7 @@ public final class TransverseMercator implements MapProjection {
     }
 
     /** Inverse into out[off] = φ, out[off+1] = λ (degrees). Package-private for UTM. */
+    @Override
     void inverse(double easting, double northing, double[] out, int off) {
         Checks.grid(easting, northing);
         double xi = (northing - falseNorthing + y0) / kA;

@@ -2,7 +2,6 @@ package io.geotick.transforms.projection;
 
 import io.geotick.geodesy.ellipsoid.Ellipsoid;
 import io.geotick.geodesy.ellipsoid.Ellipsoids;
-import io.geotick.geodesy.position.GeodeticPosition;
 import java.util.Objects;
 
 /**
@@ -14,7 +13,7 @@ import java.util.Objects;
  * φ ≥ {@value #NORTH_LIMIT}° and φ ≤ {@value #SOUTH_LIMIT}° are accepted; anything else is a
  * {@link ProjectionDomainException} naming the latitude.
  */
-public final class Ups implements MapProjection {
+public final class Ups extends KernelProjection {
     /** k₀ of UPS. */
     public static final double SCALE_FACTOR = 0.994;
     /** False easting and northing, metres. */
@@ -81,48 +80,13 @@ public final class Ups implements MapProjection {
     }
 
     @Override
-    public GridPosition project(double latitude, double longitude) {
+    void forward(double latitude, double longitude, double[] out, int off, boolean full) {
         checkLatitude(latitude);
-        return ps.project(latitude, longitude);
+        ps.forward(latitude, longitude, out, off, full);
     }
 
     @Override
-    public GeodeticPosition unproject(double easting, double northing) {
-        double[] buf = new double[2];
-        inverse(easting, northing, buf, 0);
-        return GeodeticPosition.of(buf[0], buf[1]);
-    }
-
-    @Override
-    public void project(double[] src, int srcOff, double[] dst, int dstOff, int count) {
-        Checks.arrays(src, srcOff, dst, dstOff, count);
-        for (int i = 0; i < count; i++) {
-            double lat = src[srcOff + 2 * i];
-            double lon = src[srcOff + 2 * i + 1];
-            try {
-                checkLatitude(lat);
-                ps.forward(lat, lon, dst, dstOff + 2 * i, false);
-            } catch (ProjectionDomainException e) {
-                throw Checks.atIndex(i, e);
-            }
-        }
-    }
-
-    @Override
-    public void unproject(double[] src, int srcOff, double[] dst, int dstOff, int count) {
-        Checks.arrays(src, srcOff, dst, dstOff, count);
-        for (int i = 0; i < count; i++) {
-            double e = src[srcOff + 2 * i];
-            double n = src[srcOff + 2 * i + 1];
-            try {
-                inverse(e, n, dst, dstOff + 2 * i);
-            } catch (ProjectionDomainException ex) {
-                throw Checks.atIndex(i, ex);
-            }
-        }
-    }
-
-    private void inverse(double easting, double northing, double[] out, int off) {
+    void inverse(double easting, double northing, double[] out, int off) {
         ps.inverse(easting, northing, out, off);
         double lat = out[off];
         boolean inside = hemisphere == Hemisphere.NORTH ? lat >= NORTH_LIMIT - INVERSE_SLACK

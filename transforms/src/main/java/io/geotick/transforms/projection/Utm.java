@@ -32,7 +32,7 @@ import java.util.regex.Pattern;
  * Points across the equator are accepted in either hemisphere's zone (negative northings in a northern
  * zone, northings above 10 000 000 m in a southern one), as used for data that straddle the equator.
  */
-public final class Utm implements MapProjection {
+public final class Utm extends KernelProjection {
     /** k₀ of every UTM zone. */
     public static final double SCALE_FACTOR = 0.9996;
     /** False easting, metres. */
@@ -234,50 +234,13 @@ public final class Utm implements MapProjection {
     }
 
     @Override
-    public GridPosition project(double latitude, double longitude) {
+    void forward(double latitude, double longitude, double[] out, int off, boolean full) {
         checkPoint(latitude, longitude);
-        double[] buf = new double[4];
-        tm.forward(latitude, longitude, buf, 0, true);
-        return new GridPosition(buf[0], buf[1], buf[2], buf[3]);
+        tm.forward(latitude, longitude, out, off, full);
     }
 
     @Override
-    public GeodeticPosition unproject(double easting, double northing) {
-        double[] buf = new double[2];
-        inverse(easting, northing, buf, 0);
-        return GeodeticPosition.of(buf[0], buf[1]);
-    }
-
-    @Override
-    public void project(double[] src, int srcOff, double[] dst, int dstOff, int count) {
-        Checks.arrays(src, srcOff, dst, dstOff, count);
-        for (int i = 0; i < count; i++) {
-            double lat = src[srcOff + 2 * i];
-            double lon = src[srcOff + 2 * i + 1];
-            try {
-                checkPoint(lat, lon);
-                tm.forward(lat, lon, dst, dstOff + 2 * i, false);
-            } catch (ProjectionDomainException e) {
-                throw Checks.atIndex(i, e);
-            }
-        }
-    }
-
-    @Override
-    public void unproject(double[] src, int srcOff, double[] dst, int dstOff, int count) {
-        Checks.arrays(src, srcOff, dst, dstOff, count);
-        for (int i = 0; i < count; i++) {
-            double e = src[srcOff + 2 * i];
-            double n = src[srcOff + 2 * i + 1];
-            try {
-                inverse(e, n, dst, dstOff + 2 * i);
-            } catch (ProjectionDomainException ex) {
-                throw Checks.atIndex(i, ex);
-            }
-        }
-    }
-
-    private void inverse(double easting, double northing, double[] out, int off) {
+    void inverse(double easting, double northing, double[] out, int off) {
         tm.inverse(easting, northing, out, off);
         double lat = out[off];
         double dlon = Checks.deltaLongitude(out[off + 1], tm.centralMeridian());

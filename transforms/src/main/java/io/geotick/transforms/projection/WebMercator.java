@@ -3,7 +3,6 @@ package io.geotick.transforms.projection;
 import io.geotick.geodesy.angle.DegreeTrig;
 import io.geotick.geodesy.ellipsoid.Ellipsoid;
 import io.geotick.geodesy.ellipsoid.Ellipsoids;
-import io.geotick.geodesy.position.GeodeticPosition;
 import java.util.Objects;
 
 /**
@@ -27,7 +26,7 @@ import java.util.Objects;
  * at about 85.06°, where the map is square, but the formulas hold beyond); longitudes within 180° of λ₀.
  * Accuracy: closed formulas, rounding only.
  */
-public final class WebMercator implements MapProjection {
+public final class WebMercator extends KernelProjection {
     private static final WebMercator WGS84 = new WebMercator(Ellipsoids.WGS84, 0, 0, 0,
         "Popular Visualisation Pseudo-Mercator (WGS 84, as EPSG:3857)");
 
@@ -92,48 +91,6 @@ public final class WebMercator implements MapProjection {
         return Math.sqrt(1 - e2 * s * s) / DegreeTrig.cos(latitude);
     }
 
-    @Override
-    public GridPosition project(double latitude, double longitude) {
-        double[] buf = new double[4];
-        forward(latitude, longitude, buf, 0, true);
-        return new GridPosition(buf[0], buf[1], buf[2], buf[3]);
-    }
-
-    @Override
-    public GeodeticPosition unproject(double easting, double northing) {
-        double[] buf = new double[2];
-        inverse(easting, northing, buf, 0);
-        return GeodeticPosition.of(buf[0], buf[1]);
-    }
-
-    @Override
-    public void project(double[] src, int srcOff, double[] dst, int dstOff, int count) {
-        Checks.arrays(src, srcOff, dst, dstOff, count);
-        for (int i = 0; i < count; i++) {
-            double lat = src[srcOff + 2 * i];
-            double lon = src[srcOff + 2 * i + 1];
-            try {
-                forward(lat, lon, dst, dstOff + 2 * i, false);
-            } catch (ProjectionDomainException e) {
-                throw Checks.atIndex(i, e);
-            }
-        }
-    }
-
-    @Override
-    public void unproject(double[] src, int srcOff, double[] dst, int dstOff, int count) {
-        Checks.arrays(src, srcOff, dst, dstOff, count);
-        for (int i = 0; i < count; i++) {
-            double e = src[srcOff + 2 * i];
-            double n = src[srcOff + 2 * i + 1];
-            try {
-                inverse(e, n, dst, dstOff + 2 * i);
-            } catch (ProjectionDomainException ex) {
-                throw Checks.atIndex(i, ex);
-            }
-        }
-    }
-
     private static void checkLatitude(double latitude) {
         Checks.latitude(latitude);
         if (Math.abs(latitude) == 90.0) {
@@ -142,7 +99,8 @@ public final class WebMercator implements MapProjection {
         }
     }
 
-    private void forward(double latitude, double longitude, double[] out, int off, boolean full) {
+    @Override
+    void forward(double latitude, double longitude, double[] out, int off, boolean full) {
         checkLatitude(latitude);
         Checks.longitude(longitude);
         double dlon = Checks.deltaLongitude(longitude, longitudeOfOrigin);
@@ -158,7 +116,8 @@ public final class WebMercator implements MapProjection {
         }
     }
 
-    private void inverse(double easting, double northing, double[] out, int off) {
+    @Override
+    void inverse(double easting, double northing, double[] out, int off) {
         Checks.grid(easting, northing);
         double x = (easting - falseEasting) / a;
         if (!(Math.abs(x) <= Math.PI)) {
