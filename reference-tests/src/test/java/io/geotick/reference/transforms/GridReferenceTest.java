@@ -7,6 +7,7 @@ import static org.assertj.core.api.Assertions.within;
 import io.geotick.geodesy.position.GeodeticPosition;
 import io.geotick.transforms.grid.GridFormatException;
 import io.geotick.transforms.grid.Ntv2Grid;
+import io.geotick.transforms.grid.Ntv2Writer;
 import io.geotick.transforms.grid.OutsideGridException;
 import io.geotick.transforms.height.GeoidGrid;
 import io.geotick.transforms.height.Interpolation;

@@ -9,18 +9,19 @@ import java.util.List;
  * Writes NTv2 files in the published layout (NTv2 Developer's Guide, Natural Resources Canada): 16-byte
  * records of an 8-character keyword and an 8-byte value; overview header of 11 records, per subgrid a
  * header of 11 records and GS_COUNT nodes of four floats, nodes from the south-east corner westward,
- * rows south to north, longitudes positive west; an END record.
+ * rows south to north, longitudes positive west; an END record. Shared with reference-tests through
+ * the transforms test jar.
  */
-final class Ntv2Writer {
+public final class Ntv2Writer {
     /** A subgrid; extents in arc-seconds (longitudes positive west); nodes[row][col] = {dlat, dlonW, acc, acc}. */
-    record Sub(String name, String parent, double s, double n, double e, double w, double dLat, double dLon,
+    public record Sub(String name, String parent, double s, double n, double e, double w, double dLat, double dLon,
             float[][][] nodes) {
     }
 
     private Ntv2Writer() {
     }
 
-    static byte[] write(ByteOrder order, String from, String to, List<Sub> subs) {
+    public static byte[] write(ByteOrder order, String from, String to, List<Sub> subs) {
         int size = 11 * 16;
         for (Sub s : subs) {
             size += 11 * 16 + s.nodes().length * s.nodes()[0].length * 16;
