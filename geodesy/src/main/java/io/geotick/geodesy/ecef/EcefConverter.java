@@ -50,6 +50,17 @@ public final class EcefConverter {
     // Evolute semi-axes (astroid): a e² along the equator, a e²/√(1−e²) along the axis.
     private final double evoluteP;
     private final double evoluteZ;
+    private final double b;
+    private final double bOverA;
+    private final double e2a;
+    private final double ep2b;
+    private final double bOverA2;
+    private final double e2aBOverA3;
+    /** (a + 200 km)²: within this radius Bowring's start is within 1e-9 rad of the latitude. */
+    private final double nearSurface2;
+    private static final double DEGREES_PER_RADIAN = 180.0 / Math.PI;
+    /** Beyond 1e25 m from the centre the latitude is the geocentric one to far below an ulp. */
+    private static final double FAR = 1e25;
 
     private EcefConverter(Ellipsoid ellipsoid) {
         this.ellipsoid = ellipsoid;
@@ -58,6 +69,13 @@ public final class EcefConverter {
         this.oneMinusE2 = 1 - e2;
         this.evoluteP = a * e2;
         this.evoluteZ = a * e2 / Math.sqrt(oneMinusE2);
+        this.b = ellipsoid.semiMinorAxis();
+        this.bOverA = b / a;
+        this.e2a = e2 * a;
+        this.ep2b = e2 / oneMinusE2 * b;
+        this.bOverA2 = bOverA * bOverA;
+        this.e2aBOverA3 = e2a * bOverA * bOverA * bOverA;
+        this.nearSurface2 = (a + 200e3) * (a + 200e3);
     }
 
     /** A converter on the given ellipsoid. */
@@ -175,66 +193,64 @@ public final class EcefConverter {
         double bv = s2 - xx;
         double s2l = ((xx - (s2 - bv)) + (yy - bv)) + Math.fma(x, x, -xx) + Math.fma(y, y, -yy);
         double ph = Math.sqrt(s2);
-        double pl = ph == 0 ? 0 : (Math.fma(-ph, ph, s2) + s2l) / (2 * ph);
         double az = Math.abs(z);
-
-        double lon = (x == 0 && y == 0) ? 0.0 : DegreeTrig.atan2(y, x);
-
-        // Inside the evolute (astroid) the foot point is not unique: refuse rather than guess.
-        if (ph < evoluteP && az < evoluteZ) {
-            double rp = ph / evoluteP;
-            double rz = az / evoluteZ;
-            if (Math.cbrt(rp * rp) + Math.cbrt(rz * rz) < 1) {
-                return false;
-            }
+        // atan2(±0, ±0) = 0: on the polar axis this is the convention λ = 0.
+        double lon = DegreeTrig.atan2(y, x);
+        if (ph < evoluteP && az < evoluteZ && insideEvolute(ph, az)) {
+            return false;
         }
-        if (ph == 0) {
-            // On the polar axis: latitude ±90°, longitude 0 by convention, h = |z| − b.
-            out[off] = z >= 0 ? 90.0 : -90.0;
-            out[off + 1] = 0.0;
-            out[off + 2] = az - ellipsoid.semiMinorAxis();
+        if (ph == 0 || az == 0 || !(ph < FAR && az < FAR)) {
+            special(x, y, z, ph, pl(ph, s2, s2l), lon, out, off);
             return true;
         }
-        if (az == 0) {
-            // In the equatorial plane: latitude 0, h = p − a.
-            out[off] = 0.0;
-            out[off + 1] = lon;
-            out[off + 2] = (ph - a) + pl;
-            return true;
+        double pl = pl(ph, s2, s2l);
+
+        // Start: Bowring's formula, tan φ = (z + e'² b sin³u)/(p − e² a cos³u) with u the parametric
+        // latitude of the surface point under (p, z), (cos u, sin u) ∝ ((b/a) p, z). The direction is kept
+        // as an unnormalised vector (c, s) ∝ (cos φ, sin φ), here scaled by |((b/a) p, z)|³ so that no
+        // division is needed; nothing below depends on its length. Written so that p itself enters only
+        // at the last product (its square root runs meanwhile).
+        double zz = az * az;
+        double ru2 = Math.fma(bOverA2, s2, zz);
+        double ru3 = ru2 * Math.sqrt(ru2);
+        double s = az * Math.fma(ep2b, zz, ru3);
+        double c = ph * Math.fma(-e2aBOverA3, s2, ru3);
+        // Near the surface Bowring's start is within 1e-9 rad, so the first Newton step is also the last
+        // and (c, s) stays as it is: its arc tangent can then be taken at once, alongside the Newton
+        // evaluation, and the step added at the end.
+        boolean nearSurface = s2 + zz < nearSurface2;
+        if (nearSurface) {
+            DegreeTrig.atan2Split(s, c, out, off);
         }
+        boolean rotated = false;
 
-        // Start: Bowring's formula. Parametric latitude of the surface point under (p, z), then one step.
-        double b = ellipsoid.semiMinorAxis();
-        double ep2b = e2 / oneMinusE2 * b;
-        // Parametric latitude u of the surface point under (p, z): (cos u, sin u) ∝ (b p, a z).
-        double su = az * a;
-        double cu = ph * b;
-        double ku = 1 / Math.sqrt(su * su + cu * cu);
-        su *= ku;
-        cu *= ku;
-        double s = az + ep2b * su * su * su;
-        double c = ph - a * e2 * cu * cu * cu;
-        double k = 1 / Math.sqrt(s * s + c * c);
-        s *= k;
-        c *= k;
-
-        // Newton on g(φ) with (c, s) as a unit vector. Convergence is quadratic with a constant below
-        // one, so a step below 1e-9 rad leaves an error below 1e-18 rad: that step is the last, and it is
-        // not applied to (c, s) but added to the latitude, where it is not lost to rounding. The height
-        // is stationary in φ at the foot point, so the unapplied step changes it by ~(ν + h)δ²/2 < 1e-11 m.
+        // Newton on g(φ) = p sin φ − z cos φ − e² ν sin φ cos φ, written for the unnormalised (c, s) with
+        // Q = √(c² + (1 − e²) s²) = |(c, s)|·√(1 − e² sin²φ): G = |(c,s)| g = p s − z c − e² a s c/Q and
+        // |(c,s)| g' = p c + z s − e² a ((c² − s²)/Q + e² s²c²/Q³), so the step δ = −g/g' = −G/G' needs
+        // one square root and two divisions. Convergence is quadratic with a constant below one, so a step
+        // below 1e-9 rad leaves an error below 1e-18 rad: that step is the last, and it is not applied to
+        // (c, s) but added to the latitude, where it is not lost to rounding. The height is stationary in φ
+        // at the foot point, so the unapplied step changes it by ~(ν + h)δ²/2 < 1e-11 m.
         double delta;
-        double w;
-        double nu;
+        double cc;
+        double ss;
+        double n2;
+        double q2;
+        double qh;
+        double iq;
         for (int iter = 0; ; iter++) {
-            double w2 = 1 - e2 * s * s;
-            w = Math.sqrt(w2);
-            nu = a / w;
-            // g = p s − z c − e² ν s c with the large products split exactly.
+            cc = c * c;
+            ss = s * s;
+            n2 = cc + ss;
+            q2 = n2 - e2 * ss;
+            qh = Math.sqrt(q2);
+            iq = 1 / qh;
+            double v = s * c * iq;
+            // G with the products of Earth-radius size split exactly (fma), so no cancellation is lost.
             double zc = az * c;
             double zcl = Math.fma(az, c, -zc);
-            double g = Math.fma(ph, s, -zc) - zcl + pl * s - e2 * nu * s * c;
-            // g' = p c + z s − e² ν (c² − s²) − e² ν' s c, with ν' = ν e² s c / w².
-            double gp = ph * c + az * s - e2 * nu * ((c * c - s * s) + e2 * s * s * c * c / w2);
+            double g = Math.fma(ph, s, -zc) - zcl + pl * s - e2a * v;
+            double gp = ph * c + az * s - e2a * ((cc - ss) * iq + e2 * v * v * iq);
             delta = -g / gp;
             double ad = Math.abs(delta);
             if (ad < 1e-9) {
@@ -245,32 +261,36 @@ public final class EcefConverter {
                 double m = bisect(ph, az);
                 s = Math.sin(m);
                 c = Math.cos(m);
-                w = Math.sqrt(1 - e2 * s * s);
-                nu = a / w;
+                cc = c * c;
+                ss = s * s;
+                n2 = cc + ss;
+                q2 = n2 - e2 * ss;
+                qh = Math.sqrt(q2);
+                iq = 1 / qh;
                 delta = 0;
                 break;
             }
-            // Rotate (c, s) by delta (second order), then renormalise.
-            double h2 = 0.5 * delta * delta;
-            double cn = c - s * delta - c * h2;
-            double sn = s + c * delta - s * h2;
-            double kn = 1 / Math.sqrt(cn * cn + sn * sn);
-            c = cn * kn;
-            s = sn * kn;
+            // Rotate (c, s) by atan δ: the first-order rotation, whose length change does not matter and
+            // whose angle error δ³/3 the next Newton step removes with the rest.
+            double cn = c - s * delta;
+            s = s + c * delta;
+            c = cn;
+            rotated = true;
         }
 
         // Latitude: direction of (c, s) plus the last, not yet applied, correction.
-        double lat = DegreeTrig.atan2(s, c, delta);
+        double lat = nearSurface && !rotated ? out[off] + (out[off + 1] + delta * DEGREES_PER_RADIAN)
+            : DegreeTrig.atan2(s, c, delta);
 
-        // Height h = (p c + z s)/|(c,s)| − a √(1 − e² s²/|(c,s)|²), compensated.
-        double cc = c * c;
+        // Height h = (p c + z s − a Q)/|(c, s)|, each term carried as a double-double so that the
+        // cancellation of the three Earth-radius-sized terms loses nothing, then divided with a correction.
         double ccl = Math.fma(c, c, -cc);
-        double ss = s * s;
         double ssl = Math.fma(s, s, -ss);
-        double nsum = cc + ss;
-        double nv = nsum - cc;
-        double nl = ((cc - (nsum - nv)) + (ss - nv)) + ccl + ssl;
-        double eps = (nsum - 1) + nl; // |(c,s)|² − 1, accurate to ~1e-32
+        double nv = n2 - cc;
+        double n2l = ((cc - (n2 - nv)) + (ss - nv)) + ccl + ssl; // n2 + n2l = c² + s²
+        double q = e2 * ss;
+        double q2l = ((n2 - q2) - q) + n2l - e2 * ssl; // q2 + q2l = c² + (1 − e²) s², to ~1e-19 relative
+        double ql = (Math.fma(-qh, qh, q2) + q2l) * (0.5 * iq); // qh + ql = Q
         double pc = ph * c;
         double pcl = Math.fma(ph, c, -pc) + pl * c;
         double zs = az * s;
@@ -278,24 +298,60 @@ public final class EcefConverter {
         double t = pc + zs;
         double tv = t - pc;
         double tl = ((pc - (t - tv)) + (zs - tv)) + pcl + zsl;
-        // Divide by |(c,s)| = 1 + eps/2 to first order (eps² ~ 1e-32 is negligible).
-        tl -= t * 0.5 * eps;
-        // a W = a √(1 − e² s²) as a double-double, reusing W from the last Newton evaluation (the norm
-        // correction of s² changes W by ~e²·eps ≈ 1e-18, below the double-double's use here).
-        double q = e2 * ss;
-        double w2h = 1 - q;
-        double w2l = (1 - w2h) - q;
-        double wl = (Math.fma(-w, w, w2h) + w2l) * (nu / (2 * a)); // ν/a = 1/W
-        double aw = a * w;
-        double awl = Math.fma(a, w, -aw) + a * wl;
-        double hd = t - aw;
+        double aq = a * qh;
+        double aql = Math.fma(a, qh, -aq) + a * ql;
+        double hd = t - aq;
         double hv = hd - t;
-        double h = hd + (((t - (hd - hv)) + (-aw - hv)) + (tl - awl));
+        double hdl = ((t - (hd - hv)) + (-aq - hv)) + (tl - aql); // hd + hdl = p c + z s − a Q
+        double rh = Math.sqrt(n2);
+        double ir = 1 / rh;
+        double rl = (Math.fma(-rh, rh, n2) + n2l) * (0.5 * ir); // rh + rl = |(c, s)|
+        double h0 = hd * ir;
+        double h = h0 + (Math.fma(-h0, rh, hd) + hdl - h0 * rl) * ir;
 
-        out[off] = z < 0 ? -lat : lat;
+        out[off] = Math.copySign(lat, z);
         out[off + 1] = lon;
         out[off + 2] = h;
         return true;
+    }
+
+    /** The low part of p = √(s2 + s2l) given its rounded root ph. */
+    private static double pl(double ph, double s2, double s2l) {
+        return ph == 0 || ph == Double.POSITIVE_INFINITY ? 0 : (Math.fma(-ph, ph, s2) + s2l) / (2 * ph);
+    }
+
+    /** Whether (p, z), z ≥ 0, lies inside the evolute (astroid) of the meridian ellipse. */
+    private boolean insideEvolute(double p, double z) {
+        double rp = p / evoluteP;
+        double rz = z / evoluteZ;
+        return Math.cbrt(rp * rp) + Math.cbrt(rz * rz) < 1;
+    }
+
+    /**
+     * The polar axis, the equatorial plane, and points farther than {@link #FAR} from the centre, where
+     * the geodetic latitude equals the geocentric one to below 1e-20 rad (the foot point is at most
+     * ~21 km from the centre line, seen from beyond 1e25 m), and far below one ulp.
+     */
+    private void special(double x, double y, double z, double ph, double pl, double lon, double[] out, int off) {
+        double az = Math.abs(z);
+        if (ph == 0) {
+            // On the polar axis: latitude ±90°, longitude 0 by convention, h = |z| − b.
+            out[off] = z >= 0 ? 90.0 : -90.0;
+            out[off + 1] = 0.0;
+            out[off + 2] = az - b;
+        } else if (az == 0 && ph < FAR) {
+            // In the equatorial plane: latitude 0, h = p − a.
+            out[off] = 0.0;
+            out[off + 1] = lon;
+            out[off + 2] = (ph - a) + pl;
+        } else {
+            double p = Math.hypot(x, y);
+            double lat = DegreeTrig.atan2(az, p);
+            double sp = Math.sin(Math.toRadians(lat));
+            out[off] = z < 0 ? -lat : lat;
+            out[off + 1] = lon;
+            out[off + 2] = Math.hypot(p, az) - a * Math.sqrt(1 - e2 * sp * sp);
+        }
     }
 
     /** Robust fallback, never taken in the tests' sweeps: bisection for g(φ) = 0 on [0, π/2], radians. */
