@@ -116,6 +116,13 @@ public final class DegreeTrig {
 
     private static final int ATAN_ROW = 10;
 
+    /**
+     * atan2 = offset + sign·atan(min/max) by octant index 1·[|y| > |x|] + 2·[x < 0] + 4·[y < 0]: |y| > |x|
+     * maps the angle to 90° − angle, x &lt; 0 to 180° − angle, y &lt; 0 to −angle.
+     */
+    private static final double[] OCTANT_OFFSET = {0, 90, 180, 90, 0, -90, -180, -90};
+    private static final double[] OCTANT_SIGN = {1, -1, -1, 1, -1, 1, 1, -1};
+
     private DegreeTrig() {
     }
 
@@ -205,10 +212,15 @@ public final class DegreeTrig {
      * atan2(−1, 0) = −90. Signed zeros count as zeros; atan2(0, 0) = 0.
      */
     public static double atan2(double y, double x, double correctionRadians) {
-        double ay = Math.abs(y);
-        double ax = Math.abs(x);
-        double num = Math.min(ay, ax);
-        double den = Math.max(ay, ax);
+        // Fold into the first octant without branches (the octant is random in bulk data): for non-negative
+        // doubles the order of the bit patterns is the order of the values, and selecting bit patterns
+        // compiles to conditional moves. oct = 1·[|y| > |x|] + 2·[x < 0] + 4·[y < 0]; −0 counts as +0.
+        long ly = Double.doubleToRawLongBits(Math.abs(y));
+        long lx = Double.doubleToRawLongBits(Math.abs(x));
+        boolean swap = ly > lx;
+        double num = Double.longBitsToDouble(swap ? lx : ly);
+        double den = Double.longBitsToDouble(swap ? ly : lx);
+        int oct = (swap ? 1 : 0) + (x < 0 ? 2 : 0) + (y < 0 ? 4 : 0);
         if (!(den > 0x1p-1000 && den < 0x1p1000)) {
             return atan2Rescaled(y, x, correctionRadians);
         }
@@ -222,14 +234,9 @@ public final class DegreeTrig {
         int row = (int) kd * ATAN_ROW;
         double th = ATAN_TABLE[row];
         double rest = atanRest(row, q - kd * 0x1p-6, eps);
-        // Unfold the octant without branches (the octant is random in bulk data): the angle is
-        // offset + sign·atan q, the offset 0, ±90° or ±180° and the sign ±1, both from the signs and the
-        // order of |x| and |y| alone; adding 0.0 makes −0 count as +0.
-        double swapSign = Math.copySign(1.0, ax - ay); // −1 when |y| > |x|: angle → 90 − angle
-        double xSign = Math.copySign(1.0, x + 0.0); // −1 when x < 0: angle → 180 − angle
-        double ySign = Math.copySign(1.0, y + 0.0); // −1 when y < 0: angle → −angle
-        double offset = ySign * ((90.0 - 90.0 * xSign) + xSign * (45.0 - 45.0 * swapSign));
-        double sign = ySign * xSign * swapSign;
+        // Unfold: the angle is offset + sign·atan q, offset and sign by octant.
+        double offset = OCTANT_OFFSET[oct];
+        double sign = OCTANT_SIGN[oct];
         // offset + sign·th in double-double (|offset| ≥ |th| or offset = 0, so the error term is exact).
         double hi = offset + sign * th;
         double lo = (offset - hi) + sign * th;
@@ -244,10 +251,15 @@ public final class DegreeTrig {
      * accuracy as {@link #atan2(double, double, double)}.
      */
     public static void atan2Split(double y, double x, double[] out, int off) {
-        double ay = Math.abs(y);
-        double ax = Math.abs(x);
-        double num = Math.min(ay, ax);
-        double den = Math.max(ay, ax);
+        // Fold into the first octant without branches (the octant is random in bulk data): for non-negative
+        // doubles the order of the bit patterns is the order of the values, and selecting bit patterns
+        // compiles to conditional moves. oct = 1·[|y| > |x|] + 2·[x < 0] + 4·[y < 0]; −0 counts as +0.
+        long ly = Double.doubleToRawLongBits(Math.abs(y));
+        long lx = Double.doubleToRawLongBits(Math.abs(x));
+        boolean swap = ly > lx;
+        double num = Double.longBitsToDouble(swap ? lx : ly);
+        double den = Double.longBitsToDouble(swap ? ly : lx);
+        int oct = (swap ? 1 : 0) + (x < 0 ? 2 : 0) + (y < 0 ? 4 : 0);
         if (!(den > 0x1p-1000 && den < 0x1p1000)) {
             if (den == 0 || !(den < Double.POSITIVE_INFINITY)) {
                 out[off] = atan2Rescaled(y, x, 0.0); // 0 or NaN
@@ -265,11 +277,8 @@ public final class DegreeTrig {
         int row = (int) kd * ATAN_ROW;
         double th = ATAN_TABLE[row];
         double rest = atanRest(row, q - kd * 0x1p-6, eps);
-        double swapSign = Math.copySign(1.0, ax - ay); // −1 when |y| > |x|: angle → 90 − angle
-        double xSign = Math.copySign(1.0, x + 0.0); // −1 when x < 0: angle → 180 − angle
-        double ySign = Math.copySign(1.0, y + 0.0); // −1 when y < 0: angle → −angle
-        double offset = ySign * ((90.0 - 90.0 * xSign) + xSign * (45.0 - 45.0 * swapSign));
-        double sign = ySign * xSign * swapSign;
+        double offset = OCTANT_OFFSET[oct];
+        double sign = OCTANT_SIGN[oct];
         double hi = offset + sign * th;
         double lo = (offset - hi) + sign * th;
         out[off] = hi;

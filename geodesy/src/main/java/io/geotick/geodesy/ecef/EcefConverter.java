@@ -56,8 +56,6 @@ public final class EcefConverter {
     private final double ep2b;
     private final double bOverA2;
     private final double e2aBOverA3;
-    /** (a + 200 km)²: within this radius Bowring's start is within 1e-9 rad of the latitude. */
-    private final double nearSurface2;
     private static final double DEGREES_PER_RADIAN = 180.0 / Math.PI;
     /** Beyond 1e25 m from the centre the latitude is the geocentric one to far below an ulp. */
     private static final double FAR = 1e25;
@@ -75,7 +73,6 @@ public final class EcefConverter {
         this.ep2b = e2 / oneMinusE2 * b;
         this.bOverA2 = bOverA * bOverA;
         this.e2aBOverA3 = e2a * bOverA * bOverA * bOverA;
-        this.nearSurface2 = (a + 200e3) * (a + 200e3);
     }
 
     /** A converter on the given ellipsoid. */
@@ -215,23 +212,25 @@ public final class EcefConverter {
         double ru3 = ru2 * Math.sqrt(ru2);
         double s = az * Math.fma(ep2b, zz, ru3);
         double c = ph * Math.fma(-e2aBOverA3, s2, ru3);
-        // Near the surface Bowring's start is within 1e-9 rad, so the first Newton step is also the last
-        // and (c, s) stays as it is: its arc tangent can then be taken at once, alongside the Newton
-        // evaluation, and the step added at the end.
-        boolean nearSurface = s2 + zz < nearSurface2;
-        if (nearSurface) {
-            DegreeTrig.atan2Split(s, c, out, off);
-        }
+        // The latitude's arc tangent of this start is taken at once, alongside the Newton evaluation
+        // below, which nearly always ends without moving (c, s); the step is added at the end.
+        DegreeTrig.atan2Split(s, c, out, off);
         boolean rotated = false;
 
-        // Newton on g(φ) = p sin φ − z cos φ − e² ν sin φ cos φ, written for the unnormalised (c, s) with
-        // Q = √(c² + (1 − e²) s²) = |(c, s)|·√(1 − e² sin²φ): G = |(c,s)| g = p s − z c − e² a s c/Q and
-        // |(c,s)| g' = p c + z s − e² a ((c² − s²)/Q + e² s²c²/Q³), so the step δ = −g/g' = −G/G' needs
-        // one square root and two divisions. Convergence is quadratic with a constant below one, so a step
-        // below 1e-9 rad leaves an error below 1e-18 rad: that step is the last, and it is not applied to
-        // (c, s) but added to the latitude, where it is not lost to rounding. The height is stationary in φ
-        // at the foot point, so the unapplied step changes it by ~(ν + h)δ²/2 < 1e-11 m.
+        // Newton's method on g(φ) = p sin φ − z cos φ − e² ν sin φ cos φ, written for the unnormalised
+        // (c, s) with Q = √(c² + (1 − e²) s²) = |(c, s)|·√(1 − e² sin²φ). Scaled by |(c, s)|:
+        //   G   = p s − z c − e² a s c/Q,
+        //   G'  = p c + z s − e² a ((c² − s²)/Q + e² s²c²/Q³),
+        // so the step δ = −G/G' needs one square root and two divisions. The Newton error after a step δ
+        // is below 0.03 δ² (for heights above −5,000 km), so a step below 1e-9 rad leaves an error below
+        // 3e-20 rad: that step is the last, and it is not applied to (c, s) but added to the latitude,
+        // where it is not lost to rounding. Bowring's start is within 1e-11 rad near the surface, so there
+        // the first step is the last. Steps between 1e-9 and 1e-6 rad (orbit heights) are refined to
+        // Halley's third order instead, δ ← δ − δ² G''/(2G') with
+        //   G'' = −G + 3 e² a (s c/Q)(1 − e² (c² − s²)/Q² − e⁴ s²c²/Q⁴),
+        // whose error is below 0.04 δ³ < 4e-20 rad, and are the last too.
         double delta;
+        double hStep = 0;
         double cc;
         double ss;
         double n2;
@@ -246,14 +245,26 @@ public final class EcefConverter {
             qh = Math.sqrt(q2);
             iq = 1 / qh;
             double v = s * c * iq;
+            double u = v * iq;
+            double d = cc - ss;
             // G with the products of Earth-radius size split exactly (fma), so no cancellation is lost.
             double zc = az * c;
             double zcl = Math.fma(az, c, -zc);
             double g = Math.fma(ph, s, -zc) - zcl + pl * s - e2a * v;
-            double gp = ph * c + az * s - e2a * ((cc - ss) * iq + e2 * v * v * iq);
+            double gp = ph * c + az * s - e2a * (d * iq + e2 * v * u);
             delta = -g / gp;
             double ad = Math.abs(delta);
             if (ad < 1e-9) {
+                break;
+            }
+            if (ad < 1e-6 && gp > 0) {
+                double eu = e2 * u;
+                double gpp = 3 * e2a * v * (1 - e2 * d * iq * iq - eu * eu) - g;
+                delta -= 0.5 * delta * delta * gpp / gp;
+                // The height is taken at (c, s), δ short of the foot point: h(φ + δ) = h(φ) + ½ g'(φ) δ²
+                // + O(e² a δ³), since dh/dφ = −g and d²h/dφ² = −g' exactly, and g' = G'/|(c, s)|. (For
+                // steps below 1e-9 the term is below 3e-12 m and left out.)
+                hStep = 0.5 * delta * delta * gp;
                 break;
             }
             if (!(gp > 0) || !(ad < 0.5) || iter > 20) {
@@ -271,7 +282,7 @@ public final class EcefConverter {
                 break;
             }
             // Rotate (c, s) by atan δ: the first-order rotation, whose length change does not matter and
-            // whose angle error δ³/3 the next Newton step removes with the rest.
+            // whose angle error δ³/3 the next step removes with the rest.
             double cn = c - s * delta;
             s = s + c * delta;
             c = cn;
@@ -279,8 +290,8 @@ public final class EcefConverter {
         }
 
         // Latitude: direction of (c, s) plus the last, not yet applied, correction.
-        double lat = nearSurface && !rotated ? out[off] + (out[off + 1] + delta * DEGREES_PER_RADIAN)
-            : DegreeTrig.atan2(s, c, delta);
+        double lat = rotated ? DegreeTrig.atan2(s, c, delta)
+            : out[off] + (out[off + 1] + delta * DEGREES_PER_RADIAN);
 
         // Height h = (p c + z s − a Q)/|(c, s)|, each term carried as a double-double so that the
         // cancellation of the three Earth-radius-sized terms loses nothing, then divided with a correction.
@@ -307,7 +318,7 @@ public final class EcefConverter {
         double ir = 1 / rh;
         double rl = (Math.fma(-rh, rh, n2) + n2l) * (0.5 * ir); // rh + rl = |(c, s)|
         double h0 = hd * ir;
-        double h = h0 + (Math.fma(-h0, rh, hd) + hdl - h0 * rl) * ir;
+        double h = h0 + ((Math.fma(-h0, rh, hd) + hdl - h0 * rl) + hStep) * ir;
 
         out[off] = Math.copySign(lat, z);
         out[off + 1] = lon;
