@@ -1,8 +1,8 @@
 package io.geotick.cli;
 
 /** The cautions printed in {@code --help} and by the demo; the README carries the same text. */
-final class Cautions {
-    static final String TEXT = ""
+public final class Cautions {
+    public static final String TEXT = ""
         + "Cautions:%n"
         + "  * Not for safety-of-life navigation (aviation, marine, rescue).%n"
         + "  * WGS 84 is taken as equal to the ITRF realisation of its date; the two agree%n"

@@ -40,9 +40,17 @@ import java.util.Objects;
  *       ((p/ae²)^{2/3} + (z/(a e²/√(1−e²)))^{2/3} &lt; 1), the nearest surface point may not be unique
  *       and the conversion throws {@link InvalidCoordinateException} naming the point; it never returns
  *       NaN.</li>
+ *   <li>A non-finite coordinate, or one beyond {@link #MAX_COORDINATE} (10¹⁵ m), is an
+ *       {@link InvalidCoordinateException} naming the point.</li>
  * </ul>
  */
 public final class EcefConverter {
+    /**
+     * Largest ECEF coordinate magnitude accepted by the inverse, metres (about 6,700 astronomical units):
+     * far beyond any use, and far below the ~1e154 m where squares overflow and the inverse would
+     * otherwise return NaN.
+     */
+    public static final double MAX_COORDINATE = 1e15;
     private final Ellipsoid ellipsoid;
     private final double a;
     private final double e2;
@@ -98,6 +106,9 @@ public final class EcefConverter {
      * @throws InvalidCoordinateException if the point lies inside the evolute (within ~43 km of the centre)
      */
     public GeodeticPosition toGeodetic(EcefPosition e) {
+        if (!withinReach(e.x(), e.y(), e.z())) {
+            throw beyondReach(e.x(), e.y(), e.z());
+        }
         double[] out = new double[3];
         if (!inverse(e.x(), e.y(), e.z(), out, 0)) {
             throw insideEvolute(e.x(), e.y(), e.z());
@@ -142,14 +153,23 @@ public final class EcefConverter {
             double x = in[k];
             double y = in[k + 1];
             double z = in[k + 2];
-            if (!Double.isFinite(x) || !Double.isFinite(y) || !Double.isFinite(z)) {
-                throw new InvalidCoordinateException("point " + i + ": (" + x + ", " + y + ", " + z
-                    + ") m is not a finite ECEF position");
+            if (!withinReach(x, y, z)) {
+                throw new InvalidCoordinateException("point " + i + ": " + beyondReach(x, y, z).getMessage());
             }
             if (!inverse(x, y, z, out, outOffset + 3 * i)) {
                 throw new InvalidCoordinateException("point " + i + ": " + insideEvolute(x, y, z).getMessage());
             }
         }
+    }
+
+    /** Finite and at most {@link #MAX_COORDINATE} in magnitude (NaN fails every comparison). */
+    private static boolean withinReach(double x, double y, double z) {
+        return Math.abs(x) <= MAX_COORDINATE && Math.abs(y) <= MAX_COORDINATE && Math.abs(z) <= MAX_COORDINATE;
+    }
+
+    private static InvalidCoordinateException beyondReach(double x, double y, double z) {
+        return new InvalidCoordinateException("ECEF point (" + x + ", " + y + ", " + z + ") m is not finite or"
+            + " has a coordinate beyond " + MAX_COORDINATE + " m");
     }
 
     private static void checkRange(double[] in, int inOffset, double[] out, int outOffset, int count) {

@@ -96,6 +96,10 @@ public final class Ellipsoid {
                 + " m exceeds the semi-major axis " + semiMajorAxis + " m");
         }
         double f = (semiMajorAxis - semiMinorAxis) / semiMajorAxis;
+        if (!(f < 1)) { // b below ~1e-16 a: 1 − e² would round to 0 and the radii to infinity
+            throw new InvalidCoordinateException("semi-minor axis " + semiMinorAxis
+                + " m is too small relative to the semi-major axis " + semiMajorAxis + " m");
+        }
         return new Ellipsoid(requireText(name, "name"), semiMajorAxis, semiMinorAxis, f,
             f == 0 ? Double.POSITIVE_INFINITY : 1 / f, false, requireText(source, "source"));
     }

@@ -17,15 +17,24 @@ import io.geotick.geodesy.angle.DegreeTrig;
  */
 public record Aer(double azimuth, double elevation, double range) {
     public Aer {
+        String problem = problem(azimuth, elevation, range);
+        if (problem != null) {
+            throw new InvalidCoordinateException(problem);
+        }
+    }
+
+    /** The reason (a, e, r) is not a valid AER, or null if it is. Allocates only when invalid. */
+    static String problem(double azimuth, double elevation, double range) {
         if (!(azimuth >= 0 && azimuth < 360)) {
-            throw new InvalidCoordinateException("azimuth " + azimuth + "° is outside [0°, 360°)");
+            return "azimuth " + azimuth + "° is outside [0°, 360°)";
         }
         if (!(elevation >= -90 && elevation <= 90)) {
-            throw new InvalidCoordinateException("elevation " + elevation + "° is outside [-90°, 90°]");
+            return "elevation " + elevation + "° is outside [-90°, 90°]";
         }
         if (!(range >= 0) || Double.isInfinite(range)) {
-            throw new InvalidCoordinateException("range " + range + " m must be finite and not negative");
+            return "range " + range + " m must be finite and not negative";
         }
+        return null;
     }
 
     public static Aer of(double azimuth, double elevation, double range) {
@@ -33,27 +42,47 @@ public record Aer(double azimuth, double elevation, double range) {
     }
 
     /**
-     * The AER of an ENU vector: az = atan2(e, n) mod 360°, el = atan2(u, √(e² + n²)), range = |v|.
+     * The AER of an ENU vector: az = atan2(e, n) mod 360°, el = atan2(u, √(e² + n²)), range = |v|
+     * (square roots by {@link Math#hypot}, so no intermediate overflow).
      */
     public static Aer fromEnu(Enu v) {
-        double horiz = Math.hypot(v.east(), v.north());
-        double az = horiz == 0 ? 0.0 : DegreeTrig.atan2(v.east(), v.north());
+        double[] out = new double[3];
+        enuToAer(v.east(), v.north(), v.up(), out, 0);
+        return new Aer(out[0], out[1], out[2]);
+    }
+
+    /** The ENU vector: e = r cos el sin az, n = r cos el cos az, u = r sin el. */
+    public Enu toEnu() {
+        double[] out = new double[3];
+        aerToEnu(azimuth, elevation, range, out, 0);
+        return new Enu(out[0], out[1], out[2]);
+    }
+
+    /** ENU components → (az, el, range) into out[off..off+2]; shared by the single and array variants. */
+    static void enuToAer(double e, double n, double u, double[] out, int off) {
+        double horiz = Math.hypot(e, n);
+        double az = horiz == 0 ? 0.0 : DegreeTrig.atan2(e, n);
         if (az < 0) {
             az += 360.0;
             if (az >= 360.0) { // −tiny + 360 rounds to 360
                 az = 0.0;
             }
         }
-        double el = DegreeTrig.atan2(v.up(), horiz);
-        return new Aer(az, el, Math.sqrt(horiz * horiz + v.up() * v.up()));
+        out[off] = az + 0.0; // + 0.0 turns a negative zero into 0
+        out[off + 1] = DegreeTrig.atan2(u, horiz);
+        out[off + 2] = Math.hypot(horiz, u);
     }
 
-    /** The ENU vector: e = r cos el sin az, n = r cos el cos az, u = r sin el. */
-    public Enu toEnu() {
-        double[] sc = new double[4];
-        DegreeTrig.sinCos(azimuth, sc, 0);
-        DegreeTrig.sinCos(elevation, sc, 2);
-        double horiz = range * sc[3];
-        return new Enu(horiz * sc[0], horiz * sc[1], range * sc[2]);
+    /** (az, el, range) → ENU into out[off..off+2], using out as scratch (allocation-free). */
+    static void aerToEnu(double azimuth, double elevation, double range, double[] out, int off) {
+        DegreeTrig.sinCos(azimuth, out, off);
+        double sa = out[off];
+        double ca = out[off + 1];
+        DegreeTrig.sinCos(elevation, out, off);
+        double se = out[off];
+        double horiz = range * out[off + 1];
+        out[off] = horiz * sa;
+        out[off + 1] = horiz * ca;
+        out[off + 2] = range * se;
     }
 }

@@ -1,7 +1,5 @@
 package io.geotick.geodesy.local;
 
-import io.geotick.geodesy.InvalidCoordinateException;
-
 /**
  * East, north, up components in metres in a local tangent frame.
  *
@@ -23,17 +21,5 @@ public record Enu(double east, double north, double up) {
     /** The same vector as north-east-down. */
     public Ned toNed() {
         return new Ned(north, east, -up);
-    }
-}
-
-/** Shared validation of local-frame components. */
-final class LocalChecks {
-    private LocalChecks() {
-    }
-
-    static void finite(String what, double v) {
-        if (!Double.isFinite(v)) {
-            throw new InvalidCoordinateException(what + " = " + v + " m is not a finite number");
-        }
     }
 }
