@@ -65,8 +65,6 @@ public final class EcefConverter {
     private final double bOverA2;
     private final double e2aBOverA3;
     private static final double DEGREES_PER_RADIAN = 180.0 / Math.PI;
-    /** Beyond 1e25 m from the centre the latitude is the geocentric one to far below an ulp. */
-    private static final double FAR = 1e25;
 
     private EcefConverter(Ellipsoid ellipsoid) {
         this.ellipsoid = ellipsoid;
@@ -216,8 +214,8 @@ public final class EcefConverter {
         if (ph < evoluteP && az < evoluteZ && insideEvolute(ph, az)) {
             return false;
         }
-        if (ph == 0 || az == 0 || !(ph < FAR && az < FAR)) {
-            special(x, y, z, ph, pl(ph, s2, s2l), lon, out, off);
+        if (ph == 0 || az == 0) {
+            onAxisOrEquator(z, ph, pl(ph, s2, s2l), lon, out, off);
             return true;
         }
         double pl = pl(ph, s2, s2l);
@@ -236,6 +234,7 @@ public final class EcefConverter {
         // below, which nearly always ends without moving (c, s); the step is added at the end.
         DegreeTrig.atan2Split(s, c, out, off);
         boolean rotated = false;
+        boolean bisected = false;
 
         // Newton's method on g(φ) = p sin φ − z cos φ − e² ν sin φ cos φ, written for the unnormalised
         // (c, s) with Q = √(c² + (1 − e²) s²) = |(c, s)|·√(1 − e² sin²φ). Scaled by |(c, s)|:
@@ -274,10 +273,26 @@ public final class EcefConverter {
             double gp = ph * c + az * s - e2a * (d * iq + e2 * v * u);
             delta = -g / gp;
             double ad = Math.abs(delta);
+            // Outside the evolute g has one zero in the quadrant, where g' = (M + h)|(c, s)| > 0. A start
+            // or step that leaves the quadrant, a slope of the wrong sign or a long step (only ever seen
+            // just outside the evolute) hands over to bisection, which cannot fail, and Newton resumes
+            // from its result.
+            if (!(gp > 0 && c > 0 && s > 0 && ad < 0.5) || iter > 20) {
+                if (bisected) {
+                    delta = 0;
+                    break;
+                }
+                double m = bisect(ph, az);
+                s = Math.sin(m);
+                c = Math.cos(m);
+                bisected = true;
+                rotated = true;
+                continue;
+            }
             if (ad < 1e-9) {
                 break;
             }
-            if (ad < 1e-6 && gp > 0) {
+            if (ad < 1e-6) {
                 double eu = e2 * u;
                 double gpp = 3 * e2a * v * (1 - e2 * d * iq * iq - eu * eu) - g;
                 delta -= 0.5 * delta * delta * gpp / gp;
@@ -285,20 +300,6 @@ public final class EcefConverter {
                 // + O(e² a δ³), since dh/dφ = −g and d²h/dφ² = −g' exactly, and g' = G'/|(c, s)|. (For
                 // steps below 1e-9 the term is below 3e-12 m and left out.)
                 hStep = 0.5 * delta * delta * gp;
-                break;
-            }
-            if (!(gp > 0) || !(ad < 0.5) || iter > 20) {
-                // Not expected outside the evolute: fall back to bisection, which cannot fail.
-                double m = bisect(ph, az);
-                s = Math.sin(m);
-                c = Math.cos(m);
-                cc = c * c;
-                ss = s * s;
-                n2 = cc + ss;
-                q2 = n2 - e2 * ss;
-                qh = Math.sqrt(q2);
-                iq = 1 / qh;
-                delta = 0;
                 break;
             }
             // Rotate (c, s) by atan δ: the first-order rotation, whose length change does not matter and
@@ -348,7 +349,7 @@ public final class EcefConverter {
 
     /** The low part of p = √(s2 + s2l) given its rounded root ph. */
     private static double pl(double ph, double s2, double s2l) {
-        return ph == 0 || ph == Double.POSITIVE_INFINITY ? 0 : (Math.fma(-ph, ph, s2) + s2l) / (2 * ph);
+        return ph == 0 ? 0 : (Math.fma(-ph, ph, s2) + s2l) / (2 * ph);
     }
 
     /** Whether (p, z), z ≥ 0, lies inside the evolute (astroid) of the meridian ellipse. */
@@ -358,30 +359,18 @@ public final class EcefConverter {
         return Math.cbrt(rp * rp) + Math.cbrt(rz * rz) < 1;
     }
 
-    /**
-     * The polar axis, the equatorial plane, and points farther than {@link #FAR} from the centre, where
-     * the geodetic latitude equals the geocentric one to below 1e-20 rad (the foot point is at most
-     * ~21 km from the centre line, seen from beyond 1e25 m), and far below one ulp.
-     */
-    private void special(double x, double y, double z, double ph, double pl, double lon, double[] out, int off) {
-        double az = Math.abs(z);
+    /** The polar axis (p = 0) and the equatorial plane (z = 0), exactly. */
+    private void onAxisOrEquator(double z, double ph, double pl, double lon, double[] out, int off) {
         if (ph == 0) {
             // On the polar axis: latitude ±90°, longitude 0 by convention, h = |z| − b.
             out[off] = z >= 0 ? 90.0 : -90.0;
             out[off + 1] = 0.0;
-            out[off + 2] = az - b;
-        } else if (az == 0 && ph < FAR) {
+            out[off + 2] = Math.abs(z) - b;
+        } else {
             // In the equatorial plane: latitude 0, h = p − a.
             out[off] = 0.0;
             out[off + 1] = lon;
             out[off + 2] = (ph - a) + pl;
-        } else {
-            double p = Math.hypot(x, y);
-            double lat = DegreeTrig.atan2(az, p);
-            double sp = Math.sin(Math.toRadians(lat));
-            out[off] = z < 0 ? -lat : lat;
-            out[off + 1] = lon;
-            out[off + 2] = Math.hypot(p, az) - a * Math.sqrt(1 - e2 * sp * sp);
         }
     }
 
