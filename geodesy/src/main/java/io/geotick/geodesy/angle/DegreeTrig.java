@@ -261,13 +261,7 @@ public final class DegreeTrig {
         double den = Double.longBitsToDouble(swap ? ly : lx);
         int oct = (swap ? 1 : 0) + (x < 0 ? 2 : 0) + (y < 0 ? 4 : 0);
         if (!(den > 0x1p-1000 && den < 0x1p1000)) {
-            if (den == 0 || !(den < Double.POSITIVE_INFINITY)) {
-                out[off] = atan2Rescaled(y, x, 0.0); // 0 or NaN
-                out[off + 1] = 0.0;
-            } else {
-                double scale = den < 1 ? 0x1p600 : 0x1p-600; // as in atan2Rescaled
-                atan2Split(y * scale, x * scale, out, off);
-            }
+            atan2SplitRescaled(y, x, den, out, off);
             return;
         }
         double iden = 1 / den;
@@ -283,6 +277,17 @@ public final class DegreeTrig {
         double lo = (offset - hi) + sign * th;
         out[off] = hi;
         out[off + 1] = Math.fma(sign, rest, lo);
+    }
+
+    /** {@link #atan2Split} outside the range of {@link #atan2}'s direct path, as {@link #atan2Rescaled}. */
+    private static void atan2SplitRescaled(double y, double x, double den, double[] out, int off) {
+        if (den == 0 || !(den < Double.POSITIVE_INFINITY)) {
+            out[off] = atan2Rescaled(y, x, 0.0); // 0 or NaN
+            out[off + 1] = 0.0;
+        } else {
+            double scale = den < 1 ? 0x1p600 : 0x1p-600;
+            atan2Split(y * scale, x * scale, out, off);
+        }
     }
 
     /**

@@ -237,16 +237,17 @@ public final class EcefConverter {
         boolean bisected = false;
 
         // Newton's method on g(φ) = p sin φ − z cos φ − e² ν sin φ cos φ, written for the unnormalised
-        // (c, s) with Q = √(c² + (1 − e²) s²) = |(c, s)|·√(1 − e² sin²φ). Scaled by |(c, s)|:
-        //   G   = p s − z c − e² a s c/Q,
-        //   G'  = p c + z s − e² a ((c² − s²)/Q + e² s²c²/Q³),
-        // so the step δ = −G/G' needs one square root and two divisions. The Newton error after a step δ
-        // is below 0.03 δ² (for heights above −5,000 km), so a step below 1e-9 rad leaves an error below
-        // 3e-20 rad: that step is the last, and it is not applied to (c, s) but added to the latitude,
-        // where it is not lost to rounding. Bowring's start is within 1e-11 rad near the surface, so there
-        // the first step is the last. Steps between 1e-9 and 1e-6 rad (orbit heights) are refined to
-        // Halley's third order instead, δ ← δ − δ² G''/(2G') with
-        //   G'' = −G + 3 e² a (s c/Q)(1 − e² (c² − s²)/Q² − e⁴ s²c²/Q⁴),
+        // (c, s) with Q = √(c² + (1 − e²) s²) = |(c, s)|·√(1 − e² sin²φ). Scaled by |(c, s)| Q:
+        //   GQ   = Q (p s − z c) − e² a s c,
+        //   G'Q  = Q (p c + z s) − e² a (c² − s² + e² s²c²/Q²),
+        // so the step δ = −g/g' = −GQ/G'Q needs one square root and two divisions, neither 1/Q on the
+        // way to δ (1/Q² only weighs 1e-5 of G'Q). The Newton error after a step δ is below 0.03 δ² (for
+        // heights above −5,000 km), so a step below 1e-9 rad leaves an error below 3e-20 rad: that step
+        // is the last, and it is not applied to (c, s) but added to the latitude, where it is not lost to
+        // rounding. Bowring's start is within 1e-11 rad near the surface, so there the first step is the
+        // last. Steps between 1e-9 and 1e-6 rad (orbit heights) are refined to Halley's third order
+        // instead, δ ← δ − δ² G''/(2G') with
+        //   G''Q = −GQ + 3 e² a s c (1 − e² (c² − s²)/Q² − e⁴ s²c²/Q⁴),
         // whose error is below 0.04 δ³ < 4e-20 rad, and are the last too.
         double delta;
         double hStep = 0;
@@ -255,29 +256,30 @@ public final class EcefConverter {
         double n2;
         double q2;
         double qh;
-        double iq;
+        double iq2;
         for (int iter = 0; ; iter++) {
             cc = c * c;
             ss = s * s;
             n2 = cc + ss;
             q2 = n2 - e2 * ss;
             qh = Math.sqrt(q2);
-            iq = 1 / qh;
-            double v = s * c * iq;
-            double u = v * iq;
+            iq2 = 1 / q2;
+            double sc = s * c;
             double d = cc - ss;
-            // G with the products of Earth-radius size split exactly (fma), so no cancellation is lost.
+            // p s − z c with the products of Earth-radius size split exactly (fma), so no cancellation
+            // is lost.
             double zc = az * c;
             double zcl = Math.fma(az, c, -zc);
-            double g = Math.fma(ph, s, -zc) - zcl + pl * s - e2a * v;
-            double gp = ph * c + az * s - e2a * (d * iq + e2 * v * u);
-            delta = -g / gp;
+            double psMinusZc = Math.fma(ph, s, -zc) - zcl + pl * s;
+            double gq = qh * psMinusZc - e2a * sc;
+            double gpq = qh * (ph * c + az * s) - e2a * (d + e2 * sc * sc * iq2);
+            delta = -gq / gpq;
             double ad = Math.abs(delta);
             // Outside the evolute g has one zero in the quadrant, where g' = (M + h)|(c, s)| > 0. A start
             // or step that leaves the quadrant, a slope of the wrong sign or a long step (only ever seen
             // just outside the evolute) hands over to bisection, which cannot fail, and Newton resumes
             // from its result.
-            if (!(gp > 0 && c > 0 && s > 0 && ad < 0.5) || iter > 20) {
+            if (!(gpq > 0 && c > 0 && s > 0 && ad < 0.5) || iter > 20) {
                 if (bisected) {
                     delta = 0;
                     break;
@@ -293,13 +295,13 @@ public final class EcefConverter {
                 break;
             }
             if (ad < 1e-6) {
-                double eu = e2 * u;
-                double gpp = 3 * e2a * v * (1 - e2 * d * iq * iq - eu * eu) - g;
-                delta -= 0.5 * delta * delta * gpp / gp;
+                double eu = e2 * sc * iq2;
+                double gppq = 3 * e2a * sc * (1 - e2 * d * iq2 - eu * eu) - gq;
+                delta -= 0.5 * delta * delta * gppq / gpq;
                 // The height is taken at (c, s), δ short of the foot point: h(φ + δ) = h(φ) + ½ g'(φ) δ²
-                // + O(e² a δ³), since dh/dφ = −g and d²h/dφ² = −g' exactly, and g' = G'/|(c, s)|. (For
+                // + O(e² a δ³), since dh/dφ = −g and d²h/dφ² = −g' exactly, and g' = G'Q/(Q|(c, s)|). (For
                 // steps below 1e-9 the term is below 3e-12 m and left out.)
-                hStep = 0.5 * delta * delta * gp;
+                hStep = 0.5 * delta * delta * gpq * qh * iq2;
                 break;
             }
             // Rotate (c, s) by atan δ: the first-order rotation, whose length change does not matter and
@@ -322,7 +324,7 @@ public final class EcefConverter {
         double n2l = ((cc - (n2 - nv)) + (ss - nv)) + ccl + ssl; // n2 + n2l = c² + s²
         double q = e2 * ss;
         double q2l = ((n2 - q2) - q) + n2l - e2 * ssl; // q2 + q2l = c² + (1 − e²) s², to ~1e-19 relative
-        double ql = (Math.fma(-qh, qh, q2) + q2l) * (0.5 * iq); // qh + ql = Q
+        double ql = (Math.fma(-qh, qh, q2) + q2l) * (0.5 * qh * iq2); // qh + ql = Q
         double pc = ph * c;
         double pcl = Math.fma(ph, c, -pc) + pl * c;
         double zs = az * s;
