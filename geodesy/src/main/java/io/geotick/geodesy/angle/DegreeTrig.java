@@ -8,10 +8,14 @@ package io.geotick.geodesy.angle;
  * the sine adds its own. Here the argument is first reduced exactly in degrees to [−45°, 45°] (a quadrant
  * shift: subtracting a multiple of 90 from a double in the range involved is exact), then converted to
  * radians with the product {@code d·(π/180)} carried in two doubles (an error-free {@link Math#fma}
- * product plus the low part of π/180), and the low part is applied as a first-order correction. The
- * result is within about 1 ulp of the true sin/cos of the given double in degrees; exact values come out
- * at multiples of 90° (sin 180° = 0, cos 90° = 0 exactly). The technique is common practice in
- * geodetic software.
+ * product plus the low part of π/180). Sine and cosine of that pair come from their Taylor series about 0
+ * (through x¹⁷ and x¹⁶; for |x| ≤ π/4 the first omitted terms are below 1e-19 and 2.1e-18), with the low
+ * part applied as a first-order correction and 1 − x²/2 carried with its rounding error, so that the only
+ * sizeable rounding is the final one: the result is within 0.8 ulp of the true sin/cos of the given
+ * double in degrees (worst case measured against a 40-digit computation: 0.79 ulp, near ±45°); exact values
+ * come out at multiples of 90° (sin 180° = 0, cos 90° = 0 exactly). The quadrant is applied without
+ * branches, since it is random in bulk data. Exact reduction in degrees is common practice in geodetic
+ * software.
  */
 public final class DegreeTrig {
     /** π/180 rounded to double. */
@@ -203,13 +207,16 @@ public final class DegreeTrig {
     /**
      * atan2(y, x) + c in degrees, where c is a small correction in radians, rounded once at the end.
      *
-     * <p>The octant is folded so that the arc tangent is taken of a ratio in [0, 1], split as atan(k/64),
-     * from a double-double table, plus the arc tangent of a reduced argument below 1/128 whose numerator
-     * is formed exactly with {@link Math#fma} (Taylor series to the 9th power, first omitted term below
-     * 1e-24); the radian result is converted with
-     * 180/π carried in two doubles and the octant is unfolded in double-double. The only rounding of
-     * consequence left is the final one: the result is within about 0.5 ulp (plus ~1e-19 rad). Exact results come out on the axes: atan2(0, −1) = 180, atan2(1, 0) = 90,
-     * atan2(−1, 0) = −90. Signed zeros count as zeros; atan2(0, 0) = 0.
+     * <p>The octant is folded, without branches, so that the arc tangent is taken of q = min/max of |x|
+     * and |y|, in [0, 1], formed with one division whose rounding error ε is recovered from an
+     * {@link Math#fma} residual. Then atan q = atan r0 + Σₙ₌₁..₈ cₙ dⁿ + c₁ε about the nearest
+     * r0 = k/64, d = q − r0 (|d| ≤ 1/128, first omitted term below 1e-18°), from a table of atan r0 in
+     * degrees as a double-double and of the Taylor coefficients cₙ (50-digit values rounded to double,
+     * costing at most 3e-17°); the octant is unfolded in double-double. The result is within half an ulp
+     * plus 1.2e-16° (2e-18 rad) of the exact value (worst case measured against a 40-digit computation:
+     * 1.1e-16° beyond half an ulp), so within about 0.5 ulp for angles above a few degrees. Exact results
+     * come out on the axes: atan2(0, −1) = 180, atan2(1, 0) = 90, atan2(−1, 0) = −90. Signed zeros count
+     * as zeros; atan2(0, 0) = 0.
      */
     public static double atan2(double y, double x, double correctionRadians) {
         // Fold into the first octant without branches (the octant is random in bulk data): for non-negative
