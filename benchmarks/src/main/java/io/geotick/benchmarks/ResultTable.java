@@ -39,7 +39,7 @@ public final class ResultTable {
 
     /** One benchmark result, reduced to what the table shows. */
     record Row(String benchmark, String variant, String library, String params, double nsPerPoint,
-               double error, double bytesPerPoint) {
+               double error, double bestIteration, double bytesPerPoint) {
     }
 
     private static String className(Row r) {
@@ -70,7 +70,9 @@ public final class ResultTable {
                     + " (average-time mode in nanoseconds)");
             }
             rows.add(new Row(benchmark, variant, library, params.toString(), primary.path("score").asDouble(),
-                primary.path("scoreError").asDouble(Double.NaN), allocation(r.path("secondaryMetrics"))));
+                primary.path("scoreError").asDouble(Double.NaN),
+                primary.path("scorePercentiles").path("0.0").asDouble(Double.NaN),
+                allocation(r.path("secondaryMetrics"))));
         }
         return rows;
     }
@@ -90,8 +92,8 @@ public final class ResultTable {
     /** Prints the rows as a Markdown table. */
     static void print(JsonNode results, PrintStream out) {
         List<Row> rows = rows(results);
-        out.println("| benchmark | params | ns/point | ± (99.9%) | B/point | vs peer |");
-        out.println("|---|---|---:|---:|---:|---|");
+        out.println("| benchmark | params | ns/point | ± (99.9%) | best iteration | B/point | vs peer |");
+        out.println("|---|---|---:|---:|---:|---:|---|");
         for (Row r : rows) {
             String ratio = r.library().equals(OURS) ? "-" : "(peer)";
             if (r.library().equals(OURS)) {
@@ -103,14 +105,20 @@ public final class ResultTable {
                     }
                 }
             }
-            out.println(String.format(Locale.ROOT, "| %s | %s | %.1f | %s | %s | %s |", r.benchmark(),
-                r.params().isEmpty() ? "-" : r.params(), r.nsPerPoint(),
-                Double.isNaN(r.error()) ? "-" : String.format(Locale.ROOT, "%.1f", r.error()),
+            out.println(String.format(Locale.ROOT, "| %s | %s | %.1f | %s | %s | %s | %s |", r.benchmark(),
+                r.params().isEmpty() ? "-" : r.params(), r.nsPerPoint(), oneDecimal(r.error()),
+                oneDecimal(r.bestIteration()),
                 Double.isNaN(r.bytesPerPoint()) ? "-" : String.format(Locale.ROOT, "%.2f", r.bytesPerPoint()),
                 ratio));
         }
         out.println();
-        out.println("ns/point: average time per converted point; B/point: bytes allocated per point (JMH gc"
-            + " profiler); vs peer: the peer's ns/point divided by geotick's (above 1 = geotick faster).");
+        out.println("ns/point: average time per converted point, ± its 99.9% confidence half-width; best"
+            + " iteration: the fastest measurement iteration (least disturbed on a shared machine); B/point: bytes"
+            + " allocated per point (JMH gc profiler); vs peer: the peer's ns/point divided by geotick's (above 1 ="
+            + " geotick faster).");
+    }
+
+    private static String oneDecimal(double v) {
+        return Double.isNaN(v) ? "-" : String.format(Locale.ROOT, "%.1f", v);
     }
 }
