@@ -251,8 +251,8 @@ public final class EcefConverter {
         // way to δ (1/Q² only weighs 1e-5 of G'Q). The Newton error after a step δ is below 0.03 δ² (for
         // heights above −5,000 km), so a step below 1e-9 rad leaves an error below 3e-20 rad: that step
         // is the last, and it is not applied to (c, s) but added to the latitude, where it is not lost to
-        // rounding. Bowring's start is within 1e-11 rad near the surface, so there the first step is the
-        // last. Steps between 1e-9 and 1e-6 rad (orbit heights) are refined to Halley's third order
+        // rounding. Bowring's start is within 1e-12 rad for heights up to 10 km, so there the first step is
+        // the last. Steps between 1e-9 and 1e-6 rad (orbit heights) are refined to Halley's third order
         // instead, δ ← δ − δ² G''/(2G') with
         //   G''Q = −GQ + 3 e² a s c (1 − e² (c² − s²)/Q² − e⁴ s²c²/Q⁴),
         // whose error is below 0.04 δ³ < 4e-20 rad, and are the last too.
@@ -296,6 +296,7 @@ public final class EcefConverter {
                 c = Math.cos(m);
                 bisected = true;
                 rotated = true;
+                iter = 0;
                 continue;
             }
             if (ad < 1e-9) {
