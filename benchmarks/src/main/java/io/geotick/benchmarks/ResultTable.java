@@ -13,7 +13,8 @@ import java.util.Map;
 
 /**
  * Turns a JMH JSON result file ({@code -rf json}) into a Markdown table: benchmark, parameters, time per
- * point, allocation per point (from {@code -prof gc}) and the speed ratio to its peer.
+ * point, allocation per point (from {@code -prof gc}) and the speed ratio to its peer. Results in other
+ * modes than average time in ns (e.g. throughput) are listed with their unit and without a ratio.
  *
  * <p>Pairing convention: a benchmark method named {@code <variant>_geotick} has as its peer the method
  * {@code <variant>_<library>} of the same class with the same parameters (here the library is
@@ -38,8 +39,12 @@ public final class ResultTable {
     }
 
     /** One benchmark result, reduced to what the table shows. */
-    record Row(String benchmark, String variant, String library, String params, double nsPerPoint,
+    record Row(String benchmark, String variant, String library, String params, String unit, double score,
                double error, double bestIteration, double bytesPerPoint) {
+        /** Whether the score is a time per point (average-time mode in ns), the unit the ratios need. */
+        boolean nsPerPoint() {
+            return unit.equals("ns/op");
+        }
     }
 
     private static String className(Row r) {
@@ -64,17 +69,19 @@ public final class ResultTable {
                     .append(p.getValue().asText());
             }
             JsonNode primary = r.path("primaryMetric");
-            String unit = primary.path("scoreUnit").asText();
-            if (!unit.equals("ns/op")) {
-                throw new IllegalArgumentException(full + ": score unit " + unit + ", expected ns/op"
-                    + " (average-time mode in nanoseconds)");
-            }
-            rows.add(new Row(benchmark, variant, library, params.toString(), primary.path("score").asDouble(),
+            rows.add(new Row(benchmark, variant, library, params.toString(), unit(primary),
+                primary.path("score").asDouble(),
                 primary.path("scoreError").asDouble(Double.NaN),
-                primary.path("scorePercentiles").path("0.0").asDouble(Double.NaN),
+                // The fastest iteration: the lowest time, or in throughput modes the highest rate.
+                primary.path("scorePercentiles").path(unit(primary).endsWith("/op") ? "0.0" : "100.0")
+                    .asDouble(Double.NaN),
                 allocation(r.path("secondaryMetrics"))));
         }
         return rows;
+    }
+
+    private static String unit(JsonNode primary) {
+        return primary.path("scoreUnit").asText();
     }
 
     /** The normalised allocation in bytes per operation, NaN when the run had no gc profiler. */
@@ -96,17 +103,19 @@ public final class ResultTable {
         out.println("|---|---|---:|---:|---:|---:|---|");
         for (Row r : rows) {
             String ratio = r.library().equals(OURS) ? "-" : "(peer)";
-            if (r.library().equals(OURS)) {
+            if (r.library().equals(OURS) && r.nsPerPoint()) {
                 for (Row peer : rows) {
-                    if (!peer.library().equals(OURS) && peer.variant().equals(r.variant())
+                    if (!peer.library().equals(OURS) && peer.nsPerPoint() && peer.variant().equals(r.variant())
                         && peer.params().equals(r.params()) && className(peer).equals(className(r))) {
-                        ratio = String.format(Locale.ROOT, "%.2f× %s", peer.nsPerPoint() / r.nsPerPoint(),
-                            peer.library());
+                        ratio = String.format(Locale.ROOT, "%.2f× %s", peer.score() / r.score(), peer.library());
                     }
                 }
+            } else if (!r.nsPerPoint()) {
+                ratio = "-";
             }
-            out.println(String.format(Locale.ROOT, "| %s | %s | %.1f | %s | %s | %s | %s |", r.benchmark(),
-                r.params().isEmpty() ? "-" : r.params(), r.nsPerPoint(), oneDecimal(r.error()),
+            String score = String.format(Locale.ROOT, r.nsPerPoint() ? "%.1f" : "%.3f %s", r.score(), r.unit());
+            out.println(String.format(Locale.ROOT, "| %s | %s | %s | %s | %s | %s | %s |", r.benchmark(),
+                r.params().isEmpty() ? "-" : r.params(), score, oneDecimal(r.error()),
                 oneDecimal(r.bestIteration()),
                 Double.isNaN(r.bytesPerPoint()) ? "-" : String.format(Locale.ROOT, "%.2f", r.bytesPerPoint()),
                 ratio));
