@@ -18,14 +18,21 @@ import java.util.Objects;
  *
  * <h2>Inverse (ECEF → geodetic)</h2>
  * The foot point on the meridian ellipse is found by Newton's method on the normal condition
- * g(φ) = p sin φ − z cos φ − e² ν sin φ cos φ = 0 (p = √(x² + y²)), with (cos φ, sin φ) carried as a unit
- * vector so that neither the start nor the iteration needs a trigonometric call. The start is Bowring's
- * (1976) formula, which is within about 1e-9 rad near the surface, so one step reaches double precision
- * and a second evaluation gives the final correction. The residual g and
- * the height h = p cos φ + z sin φ − a√(1 − e² sin² φ) are evaluated with error-free products
- * ({@link Math#fma}) so that no cancellation of Earth-radius-sized terms reaches the result.
+ * g(φ) = p sin φ − z cos φ − e² ν sin φ cos φ = 0 (p = √(x² + y²)), with (cos φ, sin φ) carried as an
+ * unnormalised vector (c, s) and g, g′ written homogeneously in it, so that neither the start nor the
+ * iteration needs a trigonometric call or a normalisation. The start is Bowring's (1976) formula, within
+ * about 1e-12 rad of the latitude for heights up to 10 km and within 1e-6 rad for nearly all points at
+ * orbit heights. A Newton step below 1e-9 rad (remaining error below 3e-20 rad), or one below 1e-6 rad
+ * refined to Halley's third order (remaining error below 4e-20 rad), is the last: it is added to the arc
+ * tangent of (c, s) rather than applied to the vector, so one evaluation of g usually suffices, and the
+ * arc tangent is taken while g is evaluated. The residual g and the height
+ * h = p cos φ + z sin φ − a√(1 − e² sin² φ) are evaluated with error-free products ({@link Math#fma}) and
+ * sums so that no cancellation of Earth-radius-sized terms reaches the result; the height is corrected for
+ * the unapplied step (½ g′ δ², dh/dφ being −g) where that exceeds 3e-12 m. Latitude and longitude come
+ * from {@link DegreeTrig#atan2(double, double, double)}.
  * Convergence is guaranteed: outside the evolute g has exactly one zero in the quadrant of the point and
- * changes sign across it, and any step that would leave the bracket falls back to bisection.
+ * changes sign across it, and an iterate that would leave the quadrant, a slope of the wrong sign or an
+ * overlong step hands over to bisection, from whose result Newton resumes.
  *
  * <p>Accuracy (asserted by the reference tests against a 40-digit computation on random and edge-case
  * points, heights −5,000 km to +50,000 km): the recovered (φ, λ, h), taken forward again exactly, lies
@@ -58,6 +65,13 @@ public final class EcefConverter {
     // Evolute semi-axes (astroid): a e² along the equator, a e²/√(1−e²) along the axis.
     private final double evoluteP;
     private final double evoluteZ;
+    private final double b;
+    private final double bOverA;
+    private final double e2a;
+    private final double ep2b;
+    private final double bOverA2;
+    private final double e2aBOverA3;
+    private static final double DEGREES_PER_RADIAN = 180.0 / Math.PI;
 
     private EcefConverter(Ellipsoid ellipsoid) {
         this.ellipsoid = ellipsoid;
@@ -66,6 +80,12 @@ public final class EcefConverter {
         this.oneMinusE2 = 1 - e2;
         this.evoluteP = a * e2;
         this.evoluteZ = a * e2 / Math.sqrt(oneMinusE2);
+        this.b = ellipsoid.semiMinorAxis();
+        this.bOverA = b / a;
+        this.e2a = e2 * a;
+        this.ep2b = e2 / oneMinusE2 * b;
+        this.bOverA2 = bOverA * bOverA;
+        this.e2aBOverA3 = e2a * bOverA * bOverA * bOverA;
     }
 
     /** A converter on the given ellipsoid. */
@@ -195,102 +215,124 @@ public final class EcefConverter {
         double bv = s2 - xx;
         double s2l = ((xx - (s2 - bv)) + (yy - bv)) + Math.fma(x, x, -xx) + Math.fma(y, y, -yy);
         double ph = Math.sqrt(s2);
-        double pl = ph == 0 ? 0 : (Math.fma(-ph, ph, s2) + s2l) / (2 * ph);
         double az = Math.abs(z);
-
-        double lon = (x == 0 && y == 0) ? 0.0 : DegreeTrig.atan2(y, x);
-
-        // Inside the evolute (astroid) the foot point is not unique: refuse rather than guess.
-        if (ph < evoluteP && az < evoluteZ) {
-            double rp = ph / evoluteP;
-            double rz = az / evoluteZ;
-            if (Math.cbrt(rp * rp) + Math.cbrt(rz * rz) < 1) {
-                return false;
-            }
+        // atan2(±0, ±0) = 0: on the polar axis this is the convention λ = 0.
+        double lon = DegreeTrig.atan2(y, x);
+        if (ph < evoluteP && az < evoluteZ && insideEvolute(ph, az)) {
+            return false;
         }
-        if (ph == 0) {
-            // On the polar axis: latitude ±90°, longitude 0 by convention, h = |z| − b.
-            out[off] = z >= 0 ? 90.0 : -90.0;
-            out[off + 1] = 0.0;
-            out[off + 2] = az - ellipsoid.semiMinorAxis();
+        if (ph == 0 || az == 0) {
+            onAxisOrEquator(z, ph, pl(ph, s2, s2l), lon, out, off);
             return true;
         }
-        if (az == 0) {
-            // In the equatorial plane: latitude 0, h = p − a.
-            out[off] = 0.0;
-            out[off + 1] = lon;
-            out[off + 2] = (ph - a) + pl;
-            return true;
-        }
+        double pl = pl(ph, s2, s2l);
 
-        // Start: Bowring's formula. Parametric latitude of the surface point under (p, z), then one step.
-        double b = ellipsoid.semiMinorAxis();
-        double ep2b = e2 / oneMinusE2 * b;
-        // Parametric latitude u of the surface point under (p, z): (cos u, sin u) ∝ (b p, a z).
-        double su = az * a;
-        double cu = ph * b;
-        double ku = 1 / Math.sqrt(su * su + cu * cu);
-        su *= ku;
-        cu *= ku;
-        double s = az + ep2b * su * su * su;
-        double c = ph - a * e2 * cu * cu * cu;
-        double k = 1 / Math.sqrt(s * s + c * c);
-        s *= k;
-        c *= k;
+        // Start: Bowring's formula, tan φ = (z + e'² b sin³u)/(p − e² a cos³u) with u the parametric
+        // latitude of the surface point under (p, z), (cos u, sin u) ∝ ((b/a) p, z). The direction is kept
+        // as an unnormalised vector (c, s) ∝ (cos φ, sin φ), here scaled by |((b/a) p, z)|³ so that no
+        // division is needed; nothing below depends on its length. Written so that p itself enters only
+        // at the last product (its square root runs meanwhile).
+        double zz = az * az;
+        double ru2 = Math.fma(bOverA2, s2, zz);
+        double ru3 = ru2 * Math.sqrt(ru2);
+        double s = az * Math.fma(ep2b, zz, ru3);
+        double c = ph * Math.fma(-e2aBOverA3, s2, ru3);
+        // The latitude's arc tangent of this start is taken at once, alongside the Newton evaluation
+        // below, which nearly always ends without moving (c, s); the step is added at the end.
+        DegreeTrig.atan2Split(s, c, out, off);
+        boolean rotated = false;
+        boolean bisected = false;
 
-        // Newton on g(φ) with (c, s) as a unit vector. Convergence is quadratic with a constant below
-        // one, so a step below 1e-9 rad leaves an error below 1e-18 rad: that step is the last, and it is
-        // not applied to (c, s) but added to the latitude, where it is not lost to rounding. The height
-        // is stationary in φ at the foot point, so the unapplied step changes it by ~(ν + h)δ²/2 < 1e-11 m.
+        // Newton's method on g(φ) = p sin φ − z cos φ − e² ν sin φ cos φ, written for the unnormalised
+        // (c, s) with Q = √(c² + (1 − e²) s²) = |(c, s)|·√(1 − e² sin²φ). Scaled by |(c, s)| Q:
+        //   GQ   = Q (p s − z c) − e² a s c,
+        //   G'Q  = Q (p c + z s) − e² a (c² − s² + e² s²c²/Q²),
+        // so the step δ = −g/g' = −GQ/G'Q needs one square root and two divisions, neither 1/Q on the
+        // way to δ (1/Q² only weighs 1e-5 of G'Q). The Newton error after a step δ is below 0.03 δ² (for
+        // heights above −5,000 km), so a step below 1e-9 rad leaves an error below 3e-20 rad: that step
+        // is the last, and it is not applied to (c, s) but added to the latitude, where it is not lost to
+        // rounding. Bowring's start is within 1e-12 rad for heights up to 10 km, so there the first step is
+        // the last. Steps between 1e-9 and 1e-6 rad (orbit heights) are refined to Halley's third order
+        // instead, δ ← δ − δ² G''/(2G') with
+        //   G''Q = −GQ + 3 e² a s c (1 − e² (c² − s²)/Q² − e⁴ s²c²/Q⁴),
+        // whose error is below 0.04 δ³ < 4e-20 rad, and are the last too.
         double delta;
-        double w;
-        double nu;
+        double hStep = 0;
+        double cc;
+        double ss;
+        double n2;
+        double q2;
+        double qh;
+        double iq2;
         for (int iter = 0; ; iter++) {
-            double w2 = 1 - e2 * s * s;
-            w = Math.sqrt(w2);
-            nu = a / w;
-            // g = p s − z c − e² ν s c with the large products split exactly.
+            cc = c * c;
+            ss = s * s;
+            n2 = cc + ss;
+            q2 = n2 - e2 * ss;
+            qh = Math.sqrt(q2);
+            iq2 = 1 / q2;
+            double sc = s * c;
+            double d = cc - ss;
+            // p s − z c with the products of Earth-radius size split exactly (fma), so no cancellation
+            // is lost.
             double zc = az * c;
             double zcl = Math.fma(az, c, -zc);
-            double g = Math.fma(ph, s, -zc) - zcl + pl * s - e2 * nu * s * c;
-            // g' = p c + z s − e² ν (c² − s²) − e² ν' s c, with ν' = ν e² s c / w².
-            double gp = ph * c + az * s - e2 * nu * ((c * c - s * s) + e2 * s * s * c * c / w2);
-            delta = -g / gp;
+            double psMinusZc = Math.fma(ph, s, -zc) - zcl + pl * s;
+            double gq = qh * psMinusZc - e2a * sc;
+            double gpq = qh * (ph * c + az * s) - e2a * (d + e2 * sc * sc * iq2);
+            delta = -gq / gpq;
             double ad = Math.abs(delta);
-            if (ad < 1e-9) {
-                break;
-            }
-            if (!(gp > 0) || !(ad < 0.5) || iter > 20) {
-                // Not expected outside the evolute: fall back to bisection, which cannot fail.
+            // Outside the evolute g has one zero in the quadrant, where g' = (M + h)|(c, s)| > 0. A start
+            // or step that leaves the quadrant, a slope of the wrong sign or a long step (only ever seen
+            // just outside the evolute) hands over to bisection, which cannot fail, and Newton resumes
+            // from its result.
+            if (!(gpq > 0 && c > 0 && s > 0 && ad < 0.5) || iter > 20) {
+                if (bisected) {
+                    delta = 0;
+                    break;
+                }
                 double m = bisect(ph, az);
                 s = Math.sin(m);
                 c = Math.cos(m);
-                w = Math.sqrt(1 - e2 * s * s);
-                nu = a / w;
-                delta = 0;
+                bisected = true;
+                rotated = true;
+                iter = 0;
+                continue;
+            }
+            if (ad < 1e-9) {
                 break;
             }
-            // Rotate (c, s) by delta (second order), then renormalise.
-            double h2 = 0.5 * delta * delta;
-            double cn = c - s * delta - c * h2;
-            double sn = s + c * delta - s * h2;
-            double kn = 1 / Math.sqrt(cn * cn + sn * sn);
-            c = cn * kn;
-            s = sn * kn;
+            if (ad < 1e-6) {
+                double eu = e2 * sc * iq2;
+                double gppq = 3 * e2a * sc * (1 - e2 * d * iq2 - eu * eu) - gq;
+                delta -= 0.5 * delta * delta * gppq / gpq;
+                // The height is taken at (c, s), δ short of the foot point: h(φ + δ) = h(φ) + ½ g'(φ) δ²
+                // + O(e² a δ³), since dh/dφ = −g and d²h/dφ² = −g' exactly, and g' = G'Q/(Q|(c, s)|). (For
+                // steps below 1e-9 the term is below 3e-12 m and left out.)
+                hStep = 0.5 * delta * delta * gpq * qh * iq2;
+                break;
+            }
+            // Rotate (c, s) by atan δ: the first-order rotation, whose length change does not matter and
+            // whose angle error δ³/3 the next step removes with the rest.
+            double cn = c - s * delta;
+            s = s + c * delta;
+            c = cn;
+            rotated = true;
         }
 
         // Latitude: direction of (c, s) plus the last, not yet applied, correction.
-        double lat = DegreeTrig.atan2(s, c, delta);
+        double lat = rotated ? DegreeTrig.atan2(s, c, delta)
+            : out[off] + (out[off + 1] + delta * DEGREES_PER_RADIAN);
 
-        // Height h = (p c + z s)/|(c,s)| − a √(1 − e² s²/|(c,s)|²), compensated.
-        double cc = c * c;
+        // Height h = (p c + z s − a Q)/|(c, s)|, each term carried as a double-double so that the
+        // cancellation of the three Earth-radius-sized terms loses nothing, then divided with a correction.
         double ccl = Math.fma(c, c, -cc);
-        double ss = s * s;
         double ssl = Math.fma(s, s, -ss);
-        double nsum = cc + ss;
-        double nv = nsum - cc;
-        double nl = ((cc - (nsum - nv)) + (ss - nv)) + ccl + ssl;
-        double eps = (nsum - 1) + nl; // |(c,s)|² − 1, accurate to ~1e-32
+        double nv = n2 - cc;
+        double n2l = ((cc - (n2 - nv)) + (ss - nv)) + ccl + ssl; // n2 + n2l = c² + s²
+        double q = e2 * ss;
+        double q2l = ((n2 - q2) - q) + n2l - e2 * ssl; // q2 + q2l = c² + (1 − e²) s², to ~1e-19 relative
+        double ql = (Math.fma(-qh, qh, q2) + q2l) * (0.5 * qh * iq2); // qh + ql = Q
         double pc = ph * c;
         double pcl = Math.fma(ph, c, -pc) + pl * c;
         double zs = az * s;
@@ -298,24 +340,48 @@ public final class EcefConverter {
         double t = pc + zs;
         double tv = t - pc;
         double tl = ((pc - (t - tv)) + (zs - tv)) + pcl + zsl;
-        // Divide by |(c,s)| = 1 + eps/2 to first order (eps² ~ 1e-32 is negligible).
-        tl -= t * 0.5 * eps;
-        // a W = a √(1 − e² s²) as a double-double, reusing W from the last Newton evaluation (the norm
-        // correction of s² changes W by ~e²·eps ≈ 1e-18, below the double-double's use here).
-        double q = e2 * ss;
-        double w2h = 1 - q;
-        double w2l = (1 - w2h) - q;
-        double wl = (Math.fma(-w, w, w2h) + w2l) * (nu / (2 * a)); // ν/a = 1/W
-        double aw = a * w;
-        double awl = Math.fma(a, w, -aw) + a * wl;
-        double hd = t - aw;
+        double aq = a * qh;
+        double aql = Math.fma(a, qh, -aq) + a * ql;
+        double hd = t - aq;
         double hv = hd - t;
-        double h = hd + (((t - (hd - hv)) + (-aw - hv)) + (tl - awl));
+        double hdl = ((t - (hd - hv)) + (-aq - hv)) + (tl - aql); // hd + hdl = p c + z s − a Q
+        double rh = Math.sqrt(n2);
+        double ir = 1 / rh;
+        double rl = (Math.fma(-rh, rh, n2) + n2l) * (0.5 * ir); // rh + rl = |(c, s)|
+        double h0 = hd * ir;
+        double h = h0 + ((Math.fma(-h0, rh, hd) + hdl - h0 * rl) + hStep) * ir;
 
-        out[off] = z < 0 ? -lat : lat;
+        out[off] = Math.copySign(lat, z);
         out[off + 1] = lon;
         out[off + 2] = h;
         return true;
+    }
+
+    /** The low part of p = √(s2 + s2l) given its rounded root ph. */
+    private static double pl(double ph, double s2, double s2l) {
+        return ph == 0 ? 0 : (Math.fma(-ph, ph, s2) + s2l) / (2 * ph);
+    }
+
+    /** Whether (p, z), z ≥ 0, lies inside the evolute (astroid) of the meridian ellipse. */
+    private boolean insideEvolute(double p, double z) {
+        double rp = p / evoluteP;
+        double rz = z / evoluteZ;
+        return Math.cbrt(rp * rp) + Math.cbrt(rz * rz) < 1;
+    }
+
+    /** The polar axis (p = 0) and the equatorial plane (z = 0), exactly. */
+    private void onAxisOrEquator(double z, double ph, double pl, double lon, double[] out, int off) {
+        if (ph == 0) {
+            // On the polar axis: latitude ±90°, longitude 0 by convention, h = |z| − b.
+            out[off] = z >= 0 ? 90.0 : -90.0;
+            out[off + 1] = 0.0;
+            out[off + 2] = Math.abs(z) - b;
+        } else {
+            // In the equatorial plane: latitude 0, h = p − a.
+            out[off] = 0.0;
+            out[off + 1] = lon;
+            out[off + 2] = (ph - a) + pl;
+        }
     }
 
     /** Robust fallback, never taken in the tests' sweeps: bisection for g(φ) = 0 on [0, π/2], radians. */
