@@ -145,24 +145,35 @@ public final class Conversion {
                     + " differ by about the datum shift divided by the Earth's radius)");
             }
         }
-        EcefPosition p = from.toEcef(values);
-        for (EcefStep s : steps) {
-            p = s.apply(p);
-        }
         double[] out;
         List<ExplainedStep> all = new ArrayList<>();
-        from.toEcefSteps().forEach(d -> all.add(ExplainedStep.of(d)));
-        steps.forEach(s -> all.addAll(s.steps()));
         Optional<String> zone = Optional.empty();
-        if (to instanceof SystemAdapter.Grid) {
+        if (steps.isEmpty() && sourceEllipsoid.equals(targetEllipsoid) && from instanceof SystemAdapter.Geodetic
+                && to instanceof SystemAdapter.Grid) {
+            // Geodetic straight onto a grid on the same ellipsoid: no detour through ECEF, whose round trip
+            // would add rounding (an ulp or so) to the latitude and longitude the user typed.
             SystemAdapter.Grid g = (SystemAdapter.Grid) to;
-            SystemAdapter.Grid.Result r = g.gridFromEcef(p);
+            SystemAdapter.Grid.Result r = g.gridFromGeodetic(values);
             out = r.values();
             zone = r.zone();
-            g.fromEcefSteps(r).forEach(d -> all.add(ExplainedStep.of(d)));
+            g.fromGeodeticSteps(r).forEach(d -> all.add(ExplainedStep.of(d)));
         } else {
-            out = to.fromEcef(p);
-            to.fromEcefSteps().forEach(d -> all.add(ExplainedStep.of(d)));
+            EcefPosition p = from.toEcef(values);
+            for (EcefStep s : steps) {
+                p = s.apply(p);
+            }
+            from.toEcefSteps().forEach(d -> all.add(ExplainedStep.of(d)));
+            steps.forEach(s -> all.addAll(s.steps()));
+            if (to instanceof SystemAdapter.Grid) {
+                SystemAdapter.Grid g = (SystemAdapter.Grid) to;
+                SystemAdapter.Grid.Result r = g.gridFromEcef(p);
+                out = r.values();
+                zone = r.zone();
+                g.fromEcefSteps(r).forEach(d -> all.add(ExplainedStep.of(d)));
+            } else {
+                out = to.fromEcef(p);
+                to.fromEcefSteps().forEach(d -> all.add(ExplainedStep.of(d)));
+            }
         }
         List<Axis> axes = new ArrayList<>(target.kind().axes());
         if (target.kind().isProjected()) {

@@ -169,7 +169,11 @@ interface SystemAdapter {
 
         /** The grid values E, N, h, k, γ of a position, with the zone for UTM/UPS. */
         Result gridFromEcef(EcefPosition p) {
-            double[] g = geodetic.fromEcef(p);
+            return gridFromGeodetic(geodetic.fromEcef(p));
+        }
+
+        /** The grid values of a geodetic position (φ°, λ°, h) on this grid's ellipsoid. */
+        Result gridFromGeodetic(double[] g) {
             MapProjection proj;
             ProjectionMethod method;
             if (fixed.isPresent()) {
@@ -221,6 +225,11 @@ interface SystemAdapter {
                     + " practice)", 5e-9, List.of(ProjectionMethod.TM_ACCURACY)));
             }
             return s;
+        }
+
+        /** The step of {@link #gridFromGeodetic} for one point (the zone it fell in). */
+        List<StepDescription> fromGeodeticSteps(Result r) {
+            return List.of(step(true, r.projectionName(), r.method()));
         }
 
         /** The steps of {@link #gridFromEcef} for one point (the zone it fell in). */
