@@ -26,9 +26,11 @@ import org.openjdk.jmh.infra.Blackhole;
  * WGS 84 geodetic → UTM zone 31N, geotick (6th-order Krüger series) beside Proj4J's EPSG:4326 →
  * EPSG:32631 transform, on the same 1 024 random points of the zone (fixed seed). Time per point.
  *
- * <p>Variants: geotick single point with scale and convergence ({@link Utm#project(double, double)},
- * one {@link GridPosition} allocated per point), geotick array (coordinates only, allocation-free), and
- * Proj4J's {@code CoordinateTransform.transform} reusing its two coordinate objects.
+ * <p>Variants (named {@code <variant>_geotick} / {@code <variant>_proj4j} so that {@code benchmarks/run}
+ * prints their ratio): {@code point}: geotick one point at a time with scale and convergence
+ * ({@link Utm#project(double, double)}, one {@link GridPosition} allocated per point) beside Proj4J's
+ * {@code CoordinateTransform.transform} reusing its two coordinate objects; {@code array}: geotick's
+ * array variant (coordinates only, allocation-free) beside Proj4J in a loop storing into the same array.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.AverageTime)
@@ -61,24 +63,16 @@ public class UtmProjectionBenchmark {
     /** geotick, one point at a time, with scale and convergence. */
     @Benchmark
     @OperationsPerInvocation(N)
-    public void geotickSingle(Blackhole bh) {
+    public void point_geotick(Blackhole bh) {
         for (int i = 0; i < N; i++) {
             bh.consume(utm.project(latLon[2 * i], latLon[2 * i + 1]));
         }
     }
 
-    /** geotick, the interleaved array variant (coordinates only, no allocation). */
+    /** Proj4J, EPSG:4326 → EPSG:32631, one point at a time (coordinates only: it has no scale or convergence). */
     @Benchmark
     @OperationsPerInvocation(N)
-    public double[] geotickArray() {
-        utm.project(latLon, 0, eastNorth, 0, N);
-        return eastNorth;
-    }
-
-    /** Proj4J, EPSG:4326 → EPSG:32631, one point at a time. */
-    @Benchmark
-    @OperationsPerInvocation(N)
-    public void proj4jSingle(Blackhole bh) {
+    public void point_proj4j(Blackhole bh) {
         for (int i = 0; i < N; i++) {
             in.x = latLon[2 * i + 1];
             in.y = latLon[2 * i];
@@ -86,5 +80,27 @@ public class UtmProjectionBenchmark {
             bh.consume(out.x);
             bh.consume(out.y);
         }
+    }
+
+    /** geotick, the interleaved array variant (coordinates only, no allocation). */
+    @Benchmark
+    @OperationsPerInvocation(N)
+    public double[] array_geotick() {
+        utm.project(latLon, 0, eastNorth, 0, N);
+        return eastNorth;
+    }
+
+    /** Proj4J in a loop over the same array, storing its results into the output array. */
+    @Benchmark
+    @OperationsPerInvocation(N)
+    public double[] array_proj4j() {
+        for (int i = 0; i < N; i++) {
+            in.x = latLon[2 * i + 1];
+            in.y = latLon[2 * i];
+            proj4j.transform(in, out);
+            eastNorth[2 * i] = out.x;
+            eastNorth[2 * i + 1] = out.y;
+        }
+        return eastNorth;
     }
 }

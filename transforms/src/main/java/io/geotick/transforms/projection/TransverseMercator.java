@@ -209,10 +209,12 @@ public final class TransverseMercator extends KernelProjection {
         double shp = c * sl / d;
         double chp2 = 1 + shp * shp;
         double chp = Math.sqrt(chp2);
-        // η' = asinh(sinh η') = log1p(|x| + x²/(1 + cosh η')), sign restored.
+        // η' = asinh(sinh η'): by its series near the central meridian (UTM zones: |sinh η'| < 0.07),
+        // else log1p(|x| + x²/(1 + cosh η')) with the sign restored.
         double ashp = Math.abs(shp);
-        double etapAbs = Conformal.log1p(ashp + ashp * ashp / (1 + chp));
-        double etap = shp < 0 ? -etapAbs : etapAbs;
+        double etap = ashp < Conformal.SERIES_LIMIT ? Conformal.asinhSmall(shp)
+            : Math.copySign(Conformal.log1p(ashp + ashp * ashp / (1 + chp)), shp);
+        double etapAbs = Math.abs(etap);
         if (!(etapAbs <= MAX_ETA_PRIME)) {
             throw new ProjectionDomainException("point (" + latitude + "°, " + (centralMeridian + dlon)
                 + "°) is too far from the central meridian " + centralMeridian + "° for the 6th-order "
@@ -271,7 +273,9 @@ public final class TransverseMercator extends KernelProjection {
             double bigQ = cl * Math.sqrt(c * c + t * t);
             double re = bigQ * dr + bigP * di;
             double im = bigP * dr - bigQ * di;
-            double gamma = re > 0 ? Math.atan(im / re) : Math.atan2(im, re);
+            double w = im / re;
+            double gamma = re > 0 ? (Math.abs(w) < Conformal.SERIES_LIMIT ? Conformal.atanSmall(w) : Math.atan(w))
+                : Math.atan2(im, re);
             // k = k₀(A/a)·√(1 − e² sin²φ)/D·|dζ/dζ'|, one square root.
             out[off + 2] = scale * b1 * Math.sqrt((1 - conformal.e2 * s * s) * (dr * dr + di * di)) / d;
             out[off + 3] = DegreeTrig.toDegrees(gamma);
