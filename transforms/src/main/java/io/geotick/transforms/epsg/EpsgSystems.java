@@ -209,8 +209,9 @@ public final class EpsgSystems {
         } else {
             org.locationtech.proj4j.units.Unit pu = Units.findUnits(unitName);
             if (pu == Units.METRES && !unitName.equals("metre") && !unitName.equals("metres")) {
-                throw new UnknownEpsgCodeException(from + " is defined in the unit '" + unitName + "', which Proj4J"
-                    + " does not convert (it would give the values as metres); geotick does not guess the unit");
+                throw new UnknownEpsgCodeException("EPSG:" + code + " is defined, in the EPSG definitions bundled with"
+                    + " Proj4J, in the unit '" + unitName + "', which Proj4J does not convert (it would give the values"
+                    + " as metres); geotick does not guess the unit");
             }
             String v = new java.math.BigDecimal(Double.toString(pu.value)).stripTrailingZeros().toPlainString();
             u = LinearUnit.ofDecimal(pu.name, pu.abbreviation, v, v + " m: Proj4J's value for its unit '" + unitName
