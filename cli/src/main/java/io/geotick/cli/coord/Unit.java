@@ -9,8 +9,8 @@ import java.util.Locale;
  *
  * <p>Text output is rounded so that the last shown digit is about a micrometre on the ground: 1e-11°
  * of latitude is 1.1 µm, and lengths show 1e-6 m. A grid unit other than the metre ({@link #of(LinearUnit)},
- * e.g. US survey feet) shows 6 decimals, more for a unit longer than 10 m (chains: 8), so that its last digit
- * is at most 1 µm. JSON output is not rounded (see {@link JsonOutput}).
+ * e.g. US survey feet) shows 6 decimals, one more per power of ten for a unit longer than a metre (the German
+ * legal metre 7, chains 8), so that its last digit is at most 1 µm. JSON output is not rounded (see {@link JsonOutput}).
  */
 public final class Unit {
     /** Degrees of arc; 11 decimals (1e-11° ≈ 1.1 µm along a meridian). */
