@@ -175,7 +175,7 @@ public final class Conversion {
                 to.fromEcefSteps().forEach(d -> all.add(ExplainedStep.of(d)));
             }
         }
-        List<Axis> axes = new ArrayList<>(target.kind().axes());
+        List<Axis> axes = new ArrayList<>(target.axes());
         if (target.kind().isProjected()) {
             axes.add(SystemKind.GridAxes.SCALE);
             axes.add(SystemKind.GridAxes.CONVERGENCE);

@@ -5,6 +5,7 @@ import io.geotick.transforms.epsg.EpsgSystem;
 import io.geotick.transforms.fit.SiteModel;
 import io.geotick.transforms.frames.Frame;
 import java.math.BigDecimal;
+import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 
@@ -93,6 +94,20 @@ public record CoordinateSystemSpec(SystemKind kind, Optional<GeodeticPosition> o
     /** A local frame (enu, ned, aer) about a geodetic origin, without a reference frame. */
     public static CoordinateSystemSpec local(SystemKind kind, GeodeticPosition origin) {
         return new CoordinateSystemSpec(kind, Optional.of(origin), Optional.empty());
+    }
+
+    /**
+     * The three axes in order: the kind's, except that a projected EPSG system in another unit than the metre
+     * has its easting and northing in that unit ("ftUS"); the height stays in metres.
+     */
+    public List<Axis> axes() {
+        if (kind != SystemKind.EPSG_PROJECTED || epsg.orElseThrow().unit().isMetre()) {
+            return kind.axes();
+        }
+        Unit u = Unit.of(epsg.get().unit());
+        List<Axis> a = kind.axes();
+        return List.of(new Axis(a.get(0).key(), a.get(0).label(), u), new Axis(a.get(1).key(), a.get(1).label(), u),
+            a.get(2));
     }
 
     /** The same system in the given reference frame. */

@@ -8,7 +8,9 @@ import io.geotick.cli.Json;
  * Renders a {@link ConvertedPoint} as one JSON object: the target's values as top-level number fields
  * under their keys ({@code lat, lon, h} | {@code lat, lon, H} | {@code x, y, z} | {@code e, n, u} |
  * {@code n, e, d} | {@code az, el, range} | {@code easting, northing, h} (h only when known), then for grid
- * targets {@code zone} (UTM/UPS: "31N", "N"), {@code scale} and {@code convergence} (degrees)), then {@code "system"} (the canonical SYS text of the target),
+ * targets {@code zone} (UTM/UPS: "31N", "N"), {@code scale} and {@code convergence} (degrees) and {@code unit}
+ * (the unit of easting and northing: "m", or the EPSG system's, e.g. "ft", "ftUS"; h stays metres)), then
+ * {@code "system"} (the canonical SYS text of the target),
  * {@code "ellipsoid"} (its name), {@code "from"} and {@code "to"} (the canonical SYS texts),
  * {@code "epoch"} (decimal year, or null when none was given), {@code "warnings"} (only when there are
  * any) and, with {@code --explain}, {@code "steps"} (see {@link StepListing#json}) and {@code "accuracy_m"}
@@ -36,6 +38,10 @@ public final class JsonOutput {
                 p.zone().ifPresent(z -> o.put("zone", z));
             }
             o.put(f.axis().key(), f.value());
+        }
+        if (p.system().kind().isProjected()) {
+            // The unit of easting and northing ("m", "ft", "ftUS" …); h is always metres.
+            o.put("unit", p.values().get(0).axis().unit().symbol());
         }
         o.put("system", p.system().text());
         o.put("ellipsoid", p.ellipsoid());

@@ -103,7 +103,8 @@ interface SystemAdapter {
      * A map grid: easting, northing and h ↔ geodetic on the ellipsoid ↔ ECEF. As a target it also gives the
      * point scale and the meridian convergence ({@link #gridFromEcef}), and for UTM/UPS the zone. For
      * {@code utm} without a zone the zone is chosen from each point (Norway and Svalbard rules included);
-     * such a system can only be a target.
+     * such a system can only be a target. An EPSG system defined in feet (or another unit) gives and takes
+     * easting and northing in that unit, through {@link EpsgSystem#projection()}; h stays in metres.
      */
     final class Grid implements SystemAdapter {
         private final CoordinateSystemSpec spec;
@@ -151,7 +152,8 @@ interface SystemAdapter {
         }
 
         private String gridName(MapProjection p) {
-            return spec.epsg().map(s -> s.name() + " grid").orElse(p.name());
+            return spec.epsg().map(s -> s.name() + " grid" + (s.unit().isMetre() ? "" : " (" + s.unit().symbol()
+                + ")")).orElse(p.name());
         }
 
         @Override

@@ -14,7 +14,9 @@ import java.util.List;
  * longitude    2.12955000000 deg
  * height      73.000000 m
  * </pre>
- * The first word of each line is a fixed label, so a script can pick a value by its label. An
+ * The first word of each line is a fixed label, so a script can pick a value by its label; the unit
+ * follows each value (an EPSG grid in feet shows {@code easting 984250.000000 ftUS}, its height still in
+ * {@code m}). An
  * {@code epoch} line follows {@code ellipsoid} when a coordinate epoch was given, and one {@code warning}
  * line per caution of the parameter sets used comes last. Grid targets add a {@code zone} line (UTM/UPS)
  * after {@code ellipsoid}, and {@code scale} (unitless, 10 decimals) and {@code convergence} (deg) lines

@@ -36,8 +36,9 @@ class CoordGridsTest {
     @Test
     void jsonFieldsOfAUtmTarget() throws Exception {
         JsonNode j = json(coord("--from", "geodetic", "--to", "utm:31N", "--json", "52.0", "3.5", "45"));
-        assertThat(fieldNames(j)).containsExactly("easting", "northing", "h", "zone", "scale", "convergence", "system",
-            "ellipsoid", "from", "to", "epoch");
+        assertThat(fieldNames(j)).containsExactly("easting", "northing", "h", "zone", "scale", "convergence", "unit",
+            "system", "ellipsoid", "from", "to", "epoch");
+        assertThat(j.get("unit").asText()).isEqualTo("m");
         assertThat(j.get("zone").asText()).isEqualTo("31N");
         assertThat(j.get("system").asText()).isEqualTo("utm:31N");
         // Source: Proj4J 1.4.1 EPSG:32631 as reference library (agreement to 1 mm within 3° of the CM).

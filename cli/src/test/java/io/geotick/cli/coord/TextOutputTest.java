@@ -2,6 +2,7 @@ package io.geotick.cli.coord;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import io.geotick.transforms.epsg.LinearUnit;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
@@ -13,6 +14,20 @@ class TextOutputTest {
         assertThat(Unit.METRE.formatText(-0.0000006)).isEqualTo("-0.000001");
         assertThat(Unit.DEGREE.formatText(-0.0)).isEqualTo("0.00000000000");
         assertThat(Unit.DEGREE.formatText(359.999999999996)).isEqualTo("360.00000000000");
+    }
+
+    @Test
+    void gridUnitsShowTheirSymbolAndAtMostAMicrometrePerDigit() {
+        assertThat(Unit.of(LinearUnit.METRE)).isSameAs(Unit.METRE);
+        Unit ftUs = Unit.of(LinearUnit.US_SURVEY_FOOT);
+        assertThat(ftUs.symbol()).isEqualTo("ftUS");
+        assertThat(ftUs.textDecimals()).isEqualTo(6);
+        assertThat(ftUs.formatText(984250.0000000003)).isEqualTo("984250.000000");
+        assertThat(Unit.of(LinearUnit.INTERNATIONAL_FOOT).symbol()).isEqualTo("ft");
+        // A chain of 20.1 m shows 8 decimals (0.2 µm); a unit just over a metre 7.
+        assertThat(Unit.of(LinearUnit.ofDecimal("chain", "ch", "20.1168", "test")).textDecimals()).isEqualTo(8);
+        assertThat(Unit.of(LinearUnit.ofDecimal("legal metre", "GLM", "1.0000135965", "test")).textDecimals())
+            .isEqualTo(7);
     }
 
     @Test

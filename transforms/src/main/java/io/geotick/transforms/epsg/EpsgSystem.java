@@ -20,15 +20,23 @@ import java.util.Optional;
  * @param toWgs84 the datum's shift to WGS 84 as Proj4J's definition gives it, as position-vector Helmert
  *     parameters (metres, arc-seconds, ppm; translations only for a 3-parameter shift); empty when the
  *     definition states none (for instance a grid-based datum)
- * @param projection the map projection of a projected system (empty for a geographic one)
- * @param method what the projection does (empty for a geographic system)
- * @param unit the system's native linear unit as Proj4J names it ("metres", "U.S. feet" …); the values
- *     here are always metres
+ * @param projection the map projection of a projected system (empty for a geographic one), with eastings
+ *     and northings <em>in the system's unit</em>: forward gives them in {@code unit}, inverse takes them in
+ *     {@code unit}. Pass a projection that computes in metres (every projection of the projection package
+ *     does); for a unit other than the metre the record keeps it wrapped so that its grid values are in
+ *     {@code unit} ({@link #metricProjection()} is the one in metres). Point scale and convergence are
+ *     unitless and degrees either way
+ * @param method what the projection does (empty for a geographic system); its parameters are those of the
+ *     computation in metres, plus the false easting and northing in the system's unit when that is not the
+ *     metre
+ * @param unit the unit of the eastings and northings ({@link LinearUnit#METRE} for a geographic system, whose
+ *     heights are metres too). Heights are always metres: the definitions Proj4J reads carry no vertical
+ *     unit (a definition with one is refused by its parser, so {@link EpsgSystems#byCode} reports it)
  * @param cautions approximations of this mapping a user should know about, each with its size
  */
 public record EpsgSystem(int code, Kind kind, Ellipsoid ellipsoid, String datumName,
         Optional<HelmertParameters> toWgs84, Optional<MapProjection> projection, Optional<ProjectionMethod> method,
-        String unit, List<String> cautions) {
+        LinearUnit unit, List<String> cautions) {
 
     /** Projected or geographic. */
     public enum Kind {
@@ -46,16 +54,28 @@ public record EpsgSystem(int code, Kind kind, Ellipsoid ellipsoid, String datumN
         Objects.requireNonNull(projection, "projection");
         Objects.requireNonNull(method, "method");
         Objects.requireNonNull(unit, "unit");
+        projection = projection.map(p -> UnitProjection.inUnit(p, unit));
         cautions = List.copyOf(cautions);
         if ((kind == Kind.PROJECTED) != projection.isPresent() || projection.isPresent() != method.isPresent()) {
             throw new IllegalArgumentException("EPSG:" + code + ": a projection (with its method) is present exactly"
                 + " for a projected system");
+        }
+        if (kind == Kind.GEOGRAPHIC && !unit.isMetre()) {
+            throw new IllegalArgumentException("EPSG:" + code + ": a geographic system has no grid unit, got " + unit);
         }
     }
 
     /** "EPSG:27700". */
     public String name() {
         return "EPSG:" + code;
+    }
+
+    /**
+     * The projection computing in metres behind {@link #projection()} (the same object for a metre system):
+     * eastings and northings in metres whatever the system's unit.
+     */
+    public Optional<MapProjection> metricProjection() {
+        return projection.map(UnitProjection::metric);
     }
 
     /** Whether the system is projected. */

@@ -29,6 +29,7 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.locationtech.proj4j.CRSFactory;
 import org.locationtech.proj4j.CoordinateReferenceSystem;
+import org.locationtech.proj4j.UnsupportedParameterException;
 import org.locationtech.proj4j.datum.Datum;
 import org.locationtech.proj4j.proj.ExtendedTransverseMercatorProjection;
 import org.locationtech.proj4j.proj.LambertConformalConicProjection;
@@ -37,6 +38,7 @@ import org.locationtech.proj4j.proj.MercatorProjection;
 import org.locationtech.proj4j.proj.Projection;
 import org.locationtech.proj4j.proj.StereographicAzimuthalProjection;
 import org.locationtech.proj4j.proj.TransverseMercatorProjection;
+import org.locationtech.proj4j.units.Units;
 
 /**
  * EPSG coordinate reference systems through Proj4J's bundled EPSG definitions, read with its Java API
@@ -53,6 +55,18 @@ import org.locationtech.proj4j.proj.TransverseMercatorProjection;
  *
  * <p>Parameters that Proj4J stores in radians come back in degrees with a rounding residue
  * (2.9999999999999916° for 3°); a value within 1e-12° of a multiple of 1e-9° is snapped to it.
+ *
+ * <p><b>Units.</b> A system defined in another unit than the metre (US survey feet for most US State Plane
+ * grids, international feet, Clarke's links …) gets that {@link LinearUnit}: its {@link EpsgSystem#projection()}
+ * gives and takes eastings and northings in the unit. The projection itself computes in metres: Proj4J's
+ * definitions hold the false easting and northing in metres whatever the unit (for EPSG:2263 x₀ is
+ * 300 000.0000000001 m = 984 250 ftUS), and Proj4J's own projection multiplies its metre result, false
+ * origin included, by its metres-to-unit factor (checked in the reference tests: its results for EPSG:2263
+ * and EPSG:2222 are in feet). The unit is read from the definition's unit name (metre, international foot,
+ * US survey foot exactly as published) or its decimal length in metres (taken exactly as given, named from
+ * the EPSG unit table); it must agree with Proj4J's factor to 1e-12. A unit name that Proj4J does not resolve
+ * (it would take the values as metres, as for EPSG:3140's links) is refused. Heights stay metres: the
+ * definitions Proj4J can read have no vertical unit (it refuses those that do).
  */
 public final class EpsgSystems {
     private static final Pattern CODE = Pattern.compile("(?i)\\s*EPSG\\s*:\\s*(\\d{1,9})\\s*");
@@ -99,6 +113,13 @@ public final class EpsgSystems {
         CoordinateReferenceSystem crs;
         try {
             crs = FACTORY.createFromName("EPSG:" + code);
+        } catch (UnsupportedParameterException e) {
+            // Proj4J's parser refuses what it cannot model, notably a vertical unit (compound systems such as
+            // EPSG:7407, NAD27 / Texas North + NGVD29 height in US survey feet).
+            boolean vertical = String.valueOf(e.getMessage()).contains("vunits");
+            throw new UnknownEpsgCodeException("EPSG:" + code + " is in the EPSG definitions bundled with Proj4J, "
+                + "but Proj4J cannot read it" + (vertical ? ": it is a compound system with a vertical part in its"
+                + " own unit; use the code of its horizontal system" : " (" + e.getMessage() + ")"));
         } catch (RuntimeException e) {
             throw new UnknownEpsgCodeException("unknown EPSG code " + code + ": not in the EPSG definitions "
                 + "bundled with Proj4J");
@@ -113,21 +134,113 @@ public final class EpsgSystems {
         Datum d = crs.getDatum();
         Optional<HelmertParameters> shift = toWgs84(d);
         List<String> cautions = new ArrayList<>();
-        String unit = p.getUnits() == null ? "metres" : p.getUnits().toString();
         if (p instanceof LongLatProjection) {
             return new EpsgSystem(code, EpsgSystem.Kind.GEOGRAPHIC, ellipsoid, d.getName(), shift, Optional.empty(),
-                Optional.empty(), "degrees", cautions);
+                Optional.empty(), LinearUnit.METRE, cautions);
         }
-        if (!"metres".equals(unit)) {
-            cautions.add("EPSG:" + code + " is defined in " + unit + "; geotick's eastings and northings are in"
-                + " metres (convert them yourself: no unit conversion is applied)");
-        }
+        LinearUnit unit = unit(code, crs.getParameters(), p.getFromMetres());
         Mapped m = map(code, p, ellipsoid);
         if (!m.method.inHouse()) {
             cautions.addAll(m.method.cautions());
         }
+        ProjectionMethod method = unit.isMetre() ? m.method : inUnit(m.method, unit, p);
         return new EpsgSystem(code, EpsgSystem.Kind.PROJECTED, ellipsoid, d.getName(), shift,
-            Optional.of(m.projection), Optional.of(m.method), unit, cautions);
+            Optional.of(m.projection), Optional.of(method), unit, cautions);
+    }
+
+    /**
+     * Units of the decimal lengths the EPSG definitions bundled with Proj4J give as "metres per unit": the
+     * names are those of the EPSG unit-of-measure table (from memory); the lengths are Proj4J's decimals
+     * exactly, which is what its own results use.
+     */
+    private static final Map<String, String[]> DECIMAL_UNITS = Map.ofEntries(
+        Map.entry("0.3047972654", new String[] {"Clarke's foot", "ftCla"}),
+        Map.entry("0.9143917962", new String[] {"Clarke's yard", "ydCla"}),
+        Map.entry("0.201166195164", new String[] {"Clarke's link", "lkCla"}),
+        Map.entry("0.3047997101815088", new String[] {"Gold Coast foot", "ftGC"}),
+        Map.entry("0.3047994715386762", new String[] {"British foot (Sears 1922)", "ftSe"}),
+        Map.entry("0.9143984146160287", new String[] {"British yard (Sears 1922)", "ydSe"}),
+        Map.entry("20.11676512155263", new String[] {"British chain (Sears 1922)", "chSe"}),
+        Map.entry("20.116756", new String[] {"British chain (Sears 1922 truncated)", "chSeT"}),
+        Map.entry("20.11678249437587", new String[] {"British chain (Benoit 1895 B)", "chBnB"}),
+        Map.entry("0.9143985307444408", new String[] {"Indian yard", "ydInd"}),
+        Map.entry("1.0000135965", new String[] {"German legal metre", "GLM"}));
+
+    /**
+     * The grid unit of a definition, from its unit name or its decimal length in metres (which takes
+     * precedence, as in Proj4J's parser); checked against the factor Proj4J computes with.
+     *
+     * @throws UnknownEpsgCodeException for a unit name Proj4J does not resolve (it would silently take the
+     *     values as metres), or a unit that disagrees with Proj4J's factor
+     */
+    static LinearUnit unit(int code, String[] parameters, double proj4jFromMetres) {
+        String unitName = null;
+        String toMeter = null;
+        for (String s : parameters == null ? new String[0] : parameters) {
+            String t = s.startsWith("+") ? s.substring(1) : s;
+            if (t.startsWith("units=")) {
+                unitName = t.substring("units=".length());
+            } else if (t.startsWith("to_meter=")) {
+                toMeter = t.substring("to_meter=".length());
+            }
+        }
+        String from = "EPSG:" + code + " in the EPSG definitions bundled with Proj4J";
+        LinearUnit u;
+        if (toMeter != null) {
+            String key;
+            try {
+                key = new java.math.BigDecimal(toMeter).stripTrailingZeros().toPlainString();
+            } catch (NumberFormatException e) {
+                throw new UnknownEpsgCodeException(from + " gives its unit as '" + toMeter + "' m, not a number");
+            }
+            String[] named = DECIMAL_UNITS.get(key);
+            u = "0.3048".equals(key) ? LinearUnit.INTERNATIONAL_FOOT : "1".equals(key) ? LinearUnit.METRE
+                : named != null ? LinearUnit.ofDecimal(named[0], named[1], key, key + " m as given for " + from
+                    + " (the unit's name from memory of the EPSG unit table)")
+                : LinearUnit.ofDecimal("unit of " + key + " m", "u" + key, key, key + " m as given for " + from);
+        } else if (unitName == null || unitName.equals("m")) {
+            u = LinearUnit.METRE;
+        } else if (unitName.equals("ft")) {
+            u = LinearUnit.INTERNATIONAL_FOOT;
+        } else if (unitName.equals("us-ft")) {
+            u = LinearUnit.US_SURVEY_FOOT;
+        } else if (unitName.equals("km")) {
+            u = LinearUnit.ofRatio("kilometre", "km", 1000, 1, "1000 m (SI, common practice)");
+        } else {
+            org.locationtech.proj4j.units.Unit pu = Units.findUnits(unitName);
+            if (pu == Units.METRES && !unitName.equals("metre") && !unitName.equals("metres")) {
+                throw new UnknownEpsgCodeException("EPSG:" + code + " is defined, in the EPSG definitions bundled with"
+                    + " Proj4J, in the unit '" + unitName + "', which Proj4J does not convert (it would give the values"
+                    + " as metres); geotick does not guess the unit");
+            }
+            String v = new java.math.BigDecimal(Double.toString(pu.value)).stripTrailingZeros().toPlainString();
+            u = LinearUnit.ofDecimal(pu.name, pu.abbreviation, v, v + " m: Proj4J's value for its unit '" + unitName
+                + "', used by " + from);
+        }
+        if (Math.abs(u.metresPerUnit() * proj4jFromMetres - 1) > 1e-12) {
+            throw new UnknownEpsgCodeException(from + ": its unit " + u + " disagrees with the factor Proj4J computes"
+                + " with (" + (1 / proj4jFromMetres) + " m per unit)");
+        }
+        return u;
+    }
+
+    /**
+     * The method of a system in another unit than the metre: the parameters of the computation in metres,
+     * then the false easting and northing in the unit (as the EPSG dataset states them) and the unit's length;
+     * a caution says how the values are converted.
+     */
+    private static ProjectionMethod inUnit(ProjectionMethod m, LinearUnit u, Projection p) {
+        List<Parameter> ps = new ArrayList<>(m.parameters());
+        ps.add(new Parameter("false easting in the grid unit", u.fromMetres(p.getFalseEasting()), u.symbol()));
+        ps.add(new Parameter("false northing in the grid unit", u.fromMetres(p.getFalseNorthing()), u.symbol()));
+        ps.add(new Parameter("grid unit: 1 " + u.symbol() + " (" + u.name() + ", " + u.definition() + " m exactly)",
+            u.metresPerUnit(), "m"));
+        List<String> cautions = new ArrayList<>(m.cautions());
+        cautions.add("eastings and northings are in the grid unit " + u.symbol() + " (" + u.name() + ", "
+            + u.definition() + " m): computed in metres, then divided by the exact length of the unit (one rounding,"
+            + " half an ulp); heights stay in metres");
+        return new ProjectionMethod(m.method(), m.epsgMethod(), ps, m.source() + "; unit: " + u.source(),
+            m.accuracyMetres(), cautions, m.inHouse());
     }
 
     private record Mapped(MapProjection projection, ProjectionMethod method) {

@@ -10,7 +10,16 @@ import org.locationtech.proj4j.proj.Projection;
 
 /**
  * A Proj4J projection object behind the {@link MapProjection} interface, for methods the project does not
- * implement itself. Proj4J's projections keep no state between calls, so this wrapper is thread-safe.
+ * implement itself. Grid values are in metres, like every projection of the project: Proj4J's own results
+ * are in the system's unit (its projection multiplies by {@code getFromMetres()}, applied to the false
+ * easting and northing too, which its definitions hold in metres), so they are divided by that factor
+ * here and grid input is multiplied by it. That adds one rounding (about 1e-16 relative, 0.1 nm at
+ * 1 000 km) to Proj4J's own accuracy. {@link EpsgSystem#projection()} then expresses the values in the
+ * system's unit.
+ *
+ * <p>Some Proj4J projections keep scratch values in fields while they compute (its Cassini-Soldner does),
+ * so every call into the Proj4J object is made while holding its lock: the wrapper is thread-safe, at the
+ * cost of serialising the calls on one system.
  *
  * <p>Scale and convergence are not given by Proj4J; they are computed here by central differences of the
  * projection over ±1e-6 rad of latitude and longitude: along the parallel, k = |∂(E,N)/∂λ|/(ν cos φ) with
@@ -23,11 +32,15 @@ final class Proj4jProjection implements MapProjection {
     private final Projection projection;
     private final Ellipsoid ellipsoid;
     private final String name;
+    /** Proj4J's factor from metres to the system's unit (1 for a metre system). */
+    private final double fromMetres;
 
+    /** The projection object must not be shared: the wrapper locks on it. */
     Proj4jProjection(Projection projection, Ellipsoid ellipsoid, String name) {
         this.projection = projection;
         this.ellipsoid = ellipsoid;
         this.name = name;
+        this.fromMetres = projection.getFromMetres();
     }
 
     @Override
@@ -41,9 +54,11 @@ final class Proj4jProjection implements MapProjection {
     }
 
     private double[] raw(double latitude, double longitude) {
-        ProjCoordinate out;
+        ProjCoordinate out = new ProjCoordinate();
         try {
-            out = projection.project(new ProjCoordinate(longitude, latitude), new ProjCoordinate());
+            synchronized (projection) {
+                projection.project(new ProjCoordinate(longitude, latitude), out);
+            }
         } catch (RuntimeException e) {
             throw new ProjectionDomainException("latitude " + latitude + "°, longitude " + longitude
                 + "° is outside the domain of " + name + " (" + e.getMessage() + ")");
@@ -52,7 +67,7 @@ final class Proj4jProjection implements MapProjection {
             throw new ProjectionDomainException("latitude " + latitude + "°, longitude " + longitude
                 + "° is outside the domain of " + name);
         }
-        return new double[] {out.x, out.y};
+        return fromMetres == 1 ? new double[] {out.x, out.y} : new double[] {out.x / fromMetres, out.y / fromMetres};
     }
 
     @Override
@@ -85,9 +100,11 @@ final class Proj4jProjection implements MapProjection {
             throw new ProjectionDomainException("easting " + easting + " / northing " + northing
                 + " is not a finite number");
         }
-        ProjCoordinate out;
+        ProjCoordinate out = new ProjCoordinate();
         try {
-            out = projection.inverseProject(new ProjCoordinate(easting, northing), new ProjCoordinate());
+            synchronized (projection) {
+                projection.inverseProject(new ProjCoordinate(easting * fromMetres, northing * fromMetres), out);
+            }
         } catch (RuntimeException e) {
             throw new ProjectionDomainException("easting " + easting + " m, northing " + northing
                 + " m maps to no point of " + name + " (" + e.getMessage() + ")");
