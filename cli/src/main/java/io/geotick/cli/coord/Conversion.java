@@ -16,7 +16,9 @@ import io.geotick.transforms.frames.Frame;
 import io.geotick.transforms.frames.FrameKind;
 import io.geotick.transforms.frames.FrameLink;
 import io.geotick.transforms.frames.FrameRegistry;
+import io.geotick.transforms.grid.Ntv2Grid;
 import io.geotick.transforms.height.GeoidGrid;
+import io.geotick.transforms.molodensky.Molodensky;
 import io.geotick.transforms.helmert.Helmert;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
@@ -44,8 +46,10 @@ import java.util.Set;
  *       coordinate epoch: the registry's path, whose time-dependent steps need {@code --epoch}.</li>
  *   <li>Only one names a frame: refused, since "the same frame" and "WGS 84" would both be plausible
  *       readings of the bare end.</li>
- *   <li>User Helmert parameters ({@code --helmert}) replace the registry path between two named frames;
- *       without frames they apply between the two ECEF positions on the bare {@code --ellipsoid}.</li>
+ *   <li>User Helmert parameters ({@code --helmert}), an NTv2 grid ({@code --ntv2}) or Molodensky translations
+ *       ({@code --molodensky}) replace the registry path between two named frames; without frames they apply
+ *       between the two ends on the bare {@code --ellipsoid}. The last two work on geodetic coordinates: a
+ *       geodetic source onto a geodetic or grid target skips the ECEF detour.</li>
  * </ul>
  */
 public final class Conversion {
@@ -58,10 +62,11 @@ public final class Conversion {
     private final List<EcefStep> steps;
     private final Optional<Epoch> epoch;
     private final List<String> warnings;
+    private final Optional<ChainStep> geodeticShift;
 
     private Conversion(CoordinateSystemSpec source, CoordinateSystemSpec target, SystemAdapter from,
             SystemAdapter to, Ellipsoid sourceEllipsoid, Ellipsoid targetEllipsoid, List<EcefStep> steps,
-            Optional<Epoch> epoch, List<String> warnings) {
+            Optional<Epoch> epoch, List<String> warnings, Optional<ChainStep> geodeticShift) {
         this.source = source;
         this.sourceEllipsoid = sourceEllipsoid;
         this.target = target;
@@ -71,6 +76,7 @@ public final class Conversion {
         this.steps = List.copyOf(steps);
         this.epoch = epoch;
         this.warnings = List.copyOf(warnings);
+        this.geodeticShift = geodeticShift;
     }
 
     /**
@@ -148,7 +154,23 @@ public final class Conversion {
         double[] out;
         List<ExplainedStep> all = new ArrayList<>();
         Optional<String> zone = Optional.empty();
-        if (steps.isEmpty() && sourceEllipsoid.equals(targetEllipsoid) && from instanceof SystemAdapter.Geodetic
+        if (geodeticShift.isPresent() && from instanceof SystemAdapter.Geodetic
+                && (to instanceof SystemAdapter.Geodetic || to instanceof SystemAdapter.Grid)) {
+            // A shift of the geodetic domain (NTv2, Molodensky) between geodetic values: applied to them
+            // directly, so the heights pass through exactly and no ECEF round trip adds its rounding.
+            ChainStep c = geodeticShift.get();
+            double[] g = c.chain.convert(values[0], values[1], values[2]);
+            all.addAll(c.steps());
+            if (to instanceof SystemAdapter.Grid) {
+                SystemAdapter.Grid grid = (SystemAdapter.Grid) to;
+                SystemAdapter.Grid.Result r = grid.gridFromGeodetic(g);
+                out = r.values();
+                zone = r.zone();
+                grid.fromGeodeticSteps(r).forEach(d -> all.add(ExplainedStep.of(d)));
+            } else {
+                out = g;
+            }
+        } else if (steps.isEmpty() && sourceEllipsoid.equals(targetEllipsoid) && from instanceof SystemAdapter.Geodetic
                 && to instanceof SystemAdapter.Grid) {
             // Geodetic straight onto a grid on the same ellipsoid: no detour through ECEF, whose round trip
             // would add rounding (an ulp or so) to the latitude and longitude the user typed.
@@ -211,6 +233,20 @@ public final class Conversion {
         }
     }
 
+    /**
+     * The user's own Molodensky translations (metres, source → target), the form, and their stated accuracy
+     * (empty if not stated). The ellipsoids are those of the two ends.
+     */
+    public record UserMolodensky(double dx, double dy, double dz, boolean abridged, OptionalDouble accuracyMetres) {
+        public UserMolodensky {
+            Objects.requireNonNull(accuracyMetres, "accuracyMetres");
+        }
+
+        Molodensky between(Ellipsoid source, Ellipsoid target) {
+            return abridged ? Molodensky.abridged(source, target, dx, dy, dz) : Molodensky.of(source, target, dx, dy, dz);
+        }
+    }
+
     /** Collects the options of a conversion; {@link #build()} checks that they fit together. */
     public static final class Builder {
         private final CoordinateSystemSpec source;
@@ -220,6 +256,8 @@ public final class Conversion {
         private Optional<Epoch> epoch = Optional.empty();
         private Optional<UserHelmert> helmert = Optional.empty();
         private Optional<GeoidGrid> geoid = Optional.empty();
+        private Optional<Ntv2Grid> ntv2 = Optional.empty();
+        private Optional<UserMolodensky> molodensky = Optional.empty();
         private final List<String> extraWarnings = new ArrayList<>();
 
         private Builder(CoordinateSystemSpec source, CoordinateSystemSpec target) {
@@ -251,6 +289,18 @@ public final class Conversion {
             return this;
         }
 
+        /** An NTv2 grid shift from the source frame to the target frame ({@code --ntv2}). */
+        public Builder ntv2(Ntv2Grid g) {
+            this.ntv2 = Optional.of(g);
+            return this;
+        }
+
+        /** The user's own Molodensky translations ({@code --molodensky}, {@code --abridged}). */
+        public Builder molodensky(UserMolodensky m) {
+            this.molodensky = Optional.of(m);
+            return this;
+        }
+
         /** The geoid grid for orthometric heights ({@code --geoid}). */
         public Builder geoid(GeoidGrid g) {
             this.geoid = Optional.of(g);
@@ -267,6 +317,11 @@ public final class Conversion {
         public Conversion build() {
             if (geoid.isPresent()) {
                 checkGeoidUse(source, target);
+            }
+            int shifts = (helmert.isPresent() ? 1 : 0) + (ntv2.isPresent() ? 1 : 0) + (molodensky.isPresent() ? 1 : 0);
+            if (shifts > 1) {
+                throw new UserInputException("--helmert, --ntv2 and --molodensky are each a datum shift; give one of"
+                    + " them, not " + shifts);
             }
             if (source.kind() == SystemKind.UTM && source.grid().isEmpty()) {
                 throw new UserInputException("'utm' as a source needs its zone (an easting and northing do not tell"
@@ -292,14 +347,16 @@ public final class Conversion {
         private Conversion geometric() {
             Ellipsoid e = ellipsoid.orElse(Ellipsoids.WGS84);
             List<EcefStep> steps = new ArrayList<>();
-            if (helmert.isPresent()) {
-                // The chain needs frames: two unnamed ones on the one ellipsoid, joined only by the user's set.
+            Optional<ChainStep> geodeticShift = Optional.empty();
+            if (userShift()) {
+                // The chain needs frames: two unnamed ones on the one ellipsoid, joined only by the user's shift.
                 Frame s = Frame.of("source frame", FrameKind.STATIC, e, 0, "the source system, no frame named");
                 Frame t = Frame.of("target frame", FrameKind.STATIC, e, 0, "the target system, no frame named");
-                steps.add(chainStep(s, t));
+                steps.add(chainStep(s, t, false));
+                geodeticShift = geodeticShift(s, t);
             }
             return new Conversion(source, target, SystemAdapter.of(source, e, "--ellipsoid", geoid),
-                SystemAdapter.of(target, e, "--ellipsoid", geoid), e, e, steps, epoch, List.of());
+                SystemAdapter.of(target, e, "--ellipsoid", geoid), e, e, steps, epoch, List.of(), geodeticShift);
         }
 
         private Conversion betweenFrames(Frame s, Frame t) {
@@ -310,20 +367,37 @@ public final class Conversion {
                         + " leave --ellipsoid out");
                 }
             }
-            if (helmert.isPresent() && s.equals(t)) {
-                throw new UserInputException("--helmert between " + s.name() + " and itself: name the frame your"
-                    + " parameters start from in --from and the one they lead to in --to");
+            if (userShift() && s.equals(t)) {
+                throw new UserInputException(shiftOption() + " between " + s.name() + " and itself: name the frame"
+                    + " your " + (ntv2.isPresent() ? "grid" : "parameters") + " start from in --from and the one they"
+                    + " lead to in --to");
             }
             List<EcefStep> steps = new ArrayList<>();
-            ChainStep c = chainStep(s, t);
+            ChainStep c = chainStep(s, t, false);
             if (!c.steps().isEmpty()) {
                 steps.add(c);
             }
             List<String> w = new ArrayList<>(extraWarnings);
-            w.addAll(warnings(c.chain));
+            if (!userShift()) {
+                // The registry's cautions belong to its own sets; a user's shift between the same frames has none.
+                w.addAll(warnings(c.chain));
+            }
             return new Conversion(source, target, SystemAdapter.of(source, s.ellipsoid(), s.name(), geoid),
                 SystemAdapter.of(target, t.ellipsoid(), t.name(), geoid), s.ellipsoid(), t.ellipsoid(), steps, epoch,
-                w);
+                w, geodeticShift(s, t));
+        }
+
+        private boolean userShift() {
+            return helmert.isPresent() || ntv2.isPresent() || molodensky.isPresent();
+        }
+
+        private String shiftOption() {
+            return helmert.isPresent() ? "--helmert" : ntv2.isPresent() ? "--ntv2" : "--molodensky";
+        }
+
+        /** For a shift of the geodetic domain (NTv2, Molodensky), the same chain between geodetic values. */
+        private Optional<ChainStep> geodeticShift(Frame s, Frame t) {
+            return ntv2.isPresent() || molodensky.isPresent() ? Optional.of(chainStep(s, t, true)) : Optional.empty();
         }
 
         /**
@@ -362,16 +436,24 @@ public final class Conversion {
             }
         }
 
-        private ChainStep chainStep(Frame s, Frame t) {
+        private ChainStep chainStep(Frame s, Frame t, boolean geodetic) {
             ConversionChain.Builder b = ConversionChain.builder().registry(registry)
-                .from(CoordinateSystem.ecef(s)).to(CoordinateSystem.ecef(t));
+                .from(geodetic ? CoordinateSystem.geodetic(s) : CoordinateSystem.ecef(s))
+                .to(geodetic ? CoordinateSystem.geodetic(t) : CoordinateSystem.ecef(t));
             epoch.ifPresent(b::epoch);
             helmert.ifPresent(h -> b.helmert(h.helmert(), "your own parameters (--helmert"
                 + (h.accuracyMetres().isPresent() ? ", accuracy from --helmert-accuracy)"
                 : "); accuracy not stated (give --helmert-accuracy)"), h.accuracyMetres().orElse(0)));
+            ntv2.ifPresent(b::horizontalGrid);
+            molodensky.ifPresent(m -> b.molodensky(m.between(s.ellipsoid(), t.ellipsoid()), "your own translations"
+                + " (--molodensky" + (m.accuracyMetres().isPresent() ? ", accuracy from --molodensky-accuracy)"
+                : "); accuracy not stated (give --molodensky-accuracy)"), m.accuracyMetres().orElse(0)));
+            // The stated accuracy of the user's step: what they gave, if anything; an NTv2 file states its
+            // accuracy per node, not as one figure, so the listing says "not stated" and the caution explains.
+            OptionalDouble stated = helmert.isPresent() ? helmert.get().accuracyMetres()
+                : molodensky.isPresent() ? molodensky.get().accuracyMetres() : OptionalDouble.empty();
             try {
-                return new ChainStep(b.build(), helmert.map(UserHelmert::accuracyMetres).orElse(OptionalDouble.empty()),
-                    helmert.isPresent());
+                return new ChainStep(b.build(), stated, userShift());
             } catch (MissingEpochException e) {
                 throw new UserInputException(e.getMessage() + " (give --epoch DECIMAL_YEAR or --epoch YYYY-MM-DD)", e);
             }
@@ -400,9 +482,11 @@ public final class Conversion {
             this.chain = chain;
             List<ExplainedStep> l = new ArrayList<>();
             for (StepDescription d : chain.steps()) {
-                // The user's set is the chain's only step; its accuracy is what they stated, if anything. A datum
-                // shift read from Proj4J's EPSG definitions states none either.
-                l.add(user ? new ExplainedStep(d, userAccuracy) : d.name().contains("datum of EPSG:")
+                // The user's shift is the chain's only step besides ECEF ↔ geodetic conversions (EPSG 9602, exact);
+                // its accuracy is what they stated, if anything. A datum shift read from Proj4J's EPSG definitions
+                // states none either.
+                boolean conversion = d.epsgMethod().equals(java.util.OptionalInt.of(9602));
+                l.add(user && !conversion ? new ExplainedStep(d, userAccuracy) : d.name().contains("datum of EPSG:")
                     ? new ExplainedStep(d, OptionalDouble.empty()) : ExplainedStep.of(d));
             }
             this.listed = List.copyOf(l);

@@ -5,6 +5,7 @@ import io.geotick.cli.ExitCode;
 import io.geotick.cli.UserInputException;
 import io.geotick.geodesy.ellipsoid.Ellipsoids;
 import io.geotick.transforms.Epoch;
+import io.geotick.transforms.grid.Ntv2Grid;
 import io.geotick.transforms.height.GeoidGrid;
 import io.geotick.transforms.helmert.Helmert;
 import io.geotick.transforms.helmert.HelmertParameters;
@@ -34,7 +35,9 @@ import picocli.CommandLine.Spec;
     mixinStandardHelpOptions = true,
     sortOptions = false,
     customSynopsis = {"geotick coord --from SYS --to SYS [--ellipsoid NAME] [--epoch EPOCH]",
-        "      [--helmert TX,TY,TZ,RX,RY,RZ,DS --convention CONV [--helmert-accuracy M]]",
+        "      [--helmert TX,TY,TZ,RX,RY,RZ,DS --convention CONV [--helmert-accuracy M]",
+        "       | --ntv2 FILE.gsb",
+        "       | --molodensky DX,DY,DZ [--abridged] [--molodensky-accuracy M]]",
         "      [--geoid FILE.isg] [--explain] [--json] [--] V1 V2 V3"},
     description = {
         "Convert one point between coordinate systems and reference frames.",
@@ -80,6 +83,19 @@ import picocli.CommandLine.Spec;
         "    at --epoch. Time-dependent steps (ITRF to ITRF, ITRF to ETRF2000,",
         "    WGS 84 to ITRF by date) refuse to run without --epoch: no default.",
         "",
+        "Your own datum shift replaces the registry's path (one of the three):",
+        "  --helmert        7 parameters, ECEF to ECEF, with --convention;",
+        "  --ntv2           an NTv2 grid: its horizontal shift, in the file's direction",
+        "                   (its SYSTEM_F to SYSTEM_T), from the --from frame to the",
+        "                   --to frame, bilinear as the NTv2 format prescribes; heights",
+        "                   pass through unchanged; a point outside the grid is an",
+        "                   error, never passed through unshifted;",
+        "  --molodensky     Molodensky (EPSG 9604) or, with --abridged, abridged",
+        "                   Molodensky (9605) from the --from ellipsoid to the --to",
+        "                   ellipsoid, with your translations DX,DY,DZ in metres; a",
+        "                   first-order formula, about a metre or better for classic",
+        "                   datum shifts (--explain states its approximation).",
+        "",
         "Angles are decimal degrees. Negative values may follow the options directly",
         "or after '--', which ends the options.",
         ""},
@@ -111,15 +127,21 @@ import picocli.CommandLine.Spec;
         "  geotick coord --from geodetic@OSGB36 --to EPSG:27700 --explain 52.1 -1.4 80",
         "  geotick coord --from ecef@WGS72 --to ecef@WGS84 --convention position-vector \\",
         "      --helmert 0,0,4.5,0,0,0.554,0.219 3657660.66 255768.55 5201382.11",
+        "  geotick coord --from geodetic@ED50 --to geodetic@ETRF2000 --ntv2 my-grid.gsb \\",
+        "      --explain 40.42 -3.70 650",
+        "  geotick coord --from geodetic@WGS84 --to geodetic@ED50 \\",
+        "      --molodensky 84.87,96.49,116.95 --abridged 53.81 2.13 73",
         "",
         "WGS 84 is taken as the ITRF realisation it was aligned to at the coordinate",
         "epoch: about 0.1 m agreement for G1150 (2002-2012), 1-2 cm from G1762 on, as",
         "the registry states; positions from broadcast orbits are only good to ~1 m.",
         "Survey, cadastral and legal work defers to the local geodetic authority and",
-        "licensed surveyors: use their published parameters (--helmert) and grids.",
+        "licensed surveyors: use their published parameters (--helmert) and grids",
+        "(--ntv2).",
         "",
-        "Exit codes: 0 ok; 2 bad usage or input (the message names the value);",
-        "  3 file not readable; 4 invalid geoid or site-model file.",
+        "Exit codes: 0 ok; 2 bad usage or input, a point outside the --ntv2 grid (the",
+        "  message names the value or point); 3 file not readable; 4 invalid NTv2 grid,",
+        "  geoid or site-model file.",
         "",
         Cautions.TEXT})
 public final class CoordCommand implements Callable<Integer> {
@@ -164,6 +186,27 @@ public final class CoordCommand implements Callable<Integer> {
             + "accuracy is shown as 'not stated'.")
     String helmertAccuracy;
 
+    @Option(names = "--ntv2", paramLabel = "FILE.gsb",
+        description = "NTv2 grid-shift file (the published binary layout, either byte order, subgrids): its "
+            + "horizontal shift from the --from frame to the --to frame, bilinear; heights pass through unchanged. "
+            + "Replaces the registry's path; a point outside the grid is an error, never passed through. "
+            + "No grid is built in.")
+    Path ntv2;
+
+    @Option(names = "--molodensky", paramLabel = "DX,DY,DZ",
+        description = "Your own geocentric translations DX,DY,DZ in metres for a Molodensky shift (EPSG 9604) "
+            + "from the --from ellipsoid to the --to ellipsoid (each end's frame, or --ellipsoid at both), in "
+            + "the geodetic domain. Replaces the registry's path.")
+    String molodensky;
+
+    @Option(names = "--abridged", description = "With --molodensky: the abridged formulas (EPSG 9605).")
+    boolean abridged;
+
+    @Option(names = "--molodensky-accuracy", paramLabel = "M",
+        description = "Accuracy of the --molodensky translations in metres, as their source states it; without "
+            + "it the accuracy is shown as 'not stated'.")
+    String molodenskyAccuracy;
+
     @Option(names = "--geoid", paramLabel = "FILE.isg",
         description = "Geoid-undulation grid in the ISG text format, for geodetic-orthometric systems "
             + "(bilinear interpolation). No geoid model is built in.")
@@ -190,6 +233,14 @@ public final class CoordCommand implements Callable<Integer> {
             b.epoch(epoch(epoch));
         }
         userHelmert().ifPresent(b::helmert);
+        userMolodensky().ifPresent(b::molodensky);
+        if (ntv2 != null) {
+            if (helmert != null || molodensky != null) {
+                throw new UserInputException("--ntv2 and " + (helmert != null ? "--helmert" : "--molodensky")
+                    + " are two datum shifts; give one");
+            }
+            b.ntv2(Ntv2Grid.read(ntv2));
+        }
         if (geoid != null) {
             Conversion.checkGeoidUse(source, target);
             b.geoid(GeoidGrid.read(geoid));
@@ -220,6 +271,38 @@ public final class CoordCommand implements Callable<Integer> {
             }
             throw new UserInputException("--epoch: " + e.getMessage(), e);
         }
+    }
+
+    private java.util.Optional<Conversion.UserMolodensky> userMolodensky() {
+        if (molodensky == null) {
+            if (abridged || molodenskyAccuracy != null) {
+                throw new UserInputException((abridged ? "--abridged" : "--molodensky-accuracy")
+                    + " applies to --molodensky, which is not given");
+            }
+            return java.util.Optional.empty();
+        }
+        if (helmert != null) {
+            throw new UserInputException("--molodensky and --helmert are two datum shifts; give one");
+        }
+        String[] parts = molodensky.split(",", -1);
+        if (parts.length != 3) {
+            throw new UserInputException("--molodensky '" + molodensky + "' has " + parts.length + " value"
+                + (parts.length == 1 ? "" : "s") + "; it takes 3: DX,DY,DZ (m)");
+        }
+        String[] names = {"DX (m)", "DY (m)", "DZ (m)"};
+        double[] v = new double[3];
+        for (int i = 0; i < 3; i++) {
+            v[i] = NumberArgs.decimal("--molodensky " + names[i], parts[i].strip());
+        }
+        OptionalDouble acc = OptionalDouble.empty();
+        if (molodenskyAccuracy != null) {
+            double a = NumberArgs.length("--molodensky-accuracy", molodenskyAccuracy);
+            if (a < 0) {
+                throw new UserInputException("--molodensky-accuracy " + molodenskyAccuracy + " m is negative");
+            }
+            acc = OptionalDouble.of(a);
+        }
+        return java.util.Optional.of(new Conversion.UserMolodensky(v[0], v[1], v[2], abridged, acc));
     }
 
     private java.util.Optional<Conversion.UserHelmert> userHelmert() {

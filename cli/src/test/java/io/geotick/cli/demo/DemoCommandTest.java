@@ -39,6 +39,7 @@ class DemoCommandTest {
     void datumPartShowsTheShiftsAndTheCostOfMixUps() {
         String out = CliRun.of("demo").out();
         assertThat(out).contains("Datum shifts", "ITRF2020", "ETRF2000", "ED50", "fictional company");
+        assertThat(out).containsPattern("Molodensky's formulas \\(EPSG 9604.*\\R.* land 0\\.0\\d\\d m from this geocentric");
         assertThat(out).contains("coordinate-frame rotation", "reference epoch", "steps: 2", "source: EUREF");
         assertThat(out).contains("geotick coord --from ecef@ITRF2020 --to geodetic@ETRF2000");
     }

@@ -1,6 +1,7 @@
 package io.geotick.transforms.chain;
 
 import io.geotick.geodesy.InvalidCoordinateException;
+import io.geotick.geodesy.ellipsoid.Ellipsoid;
 import io.geotick.transforms.Epoch;
 import io.geotick.transforms.StepDescription;
 import io.geotick.transforms.StepDescription.Parameter;
@@ -9,6 +10,7 @@ import io.geotick.transforms.frames.FrameStep;
 import io.geotick.transforms.frames.FrameTransformation;
 import io.geotick.transforms.helmert.GeocentricTransform;
 import io.geotick.transforms.helmert.Helmert;
+import io.geotick.transforms.molodensky.Molodensky;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
@@ -20,14 +22,19 @@ import java.util.OptionalInt;
  * A conversion from a source coordinate system to a target one at a coordinate epoch, as an ordered list
  * of steps. Immutable and thread-safe: build once, use from many threads.
  *
- * <p>The steps, in order: orthometric → ellipsoidal height (if the source heights are orthometric);
- * geodetic → ECEF on the source ellipsoid; the frame path from the registry (or the user's own Helmert
- * parameters, or an NTv2 grid shift in the geodetic domain); ECEF → geodetic on the target ellipsoid;
- * ellipsoidal → orthometric height. Conversions that would cancel (same frame, same kind) are left out.
- * The coordinates keep their epoch: the chain changes frames, not time.
+ * <p>The steps, in order: a site grid's inverse model (if the source is a {@link CoordinateKind#SITE site
+ * grid}) and a map grid's inverse projection (if the source, or the site grid's base, is
+ * {@link CoordinateKind#PROJECTED projected}); orthometric → ellipsoidal height (if the source heights are
+ * orthometric); geodetic → ECEF on the source ellipsoid; the frame path from the registry (or the user's own
+ * Helmert parameters, or an NTv2 grid shift or a Molodensky shift in the geodetic domain); ECEF → geodetic on
+ * the target ellipsoid; ellipsoidal → orthometric height; the target's projection and site model. Conversions
+ * that would cancel (same frame, same kind; a site grid onto its own base) are left out. The coordinates keep
+ * their epoch: the chain changes frames, not time.
  *
- * <p>Coordinates are triples: ECEF (x, y, z) in metres, geodetic (latitude °, longitude °, height m).
- * Expected accuracy ({@link #accuracyMetres()}): root-sum-square of the steps' stated accuracies.
+ * <p>Coordinates are triples: ECEF (x, y, z) in metres, geodetic (latitude °, longitude °, height m),
+ * projected (easting m, northing m, ellipsoidal height m), site grid (site x, y m and the base's third value,
+ * or site x, y, z m for a 3D Helmert). Expected accuracy ({@link #accuracyMetres()}): root-sum-square of the
+ * steps' stated accuracies (a site grid states its fit's RMS residual).
  *
  * <pre>{@code
  * ConversionChain c = ConversionChain.builder()
@@ -115,7 +122,8 @@ public final class ConversionChain {
 
     /**
      * Converts {@code count} interleaved triples from {@code in} into {@code out}; in-place use is allowed.
-     * Allocates nothing beyond what the steps document (none of the built-in steps allocate).
+     * Allocates nothing per point; the NTv2 steps and the reverse Molodensky step allocate one small scratch
+     * array per call.
      *
      * @throws InvalidCoordinateException on the first invalid point, naming its index
      */
@@ -165,6 +173,9 @@ public final class ConversionChain {
         private double userAccuracy;
         private GeoidStep geoid;
         private HorizontalGridStep grid;
+        private Molodensky molodensky;
+        private String molodenskySource;
+        private double molodenskyAccuracy;
 
         private Builder() {
         }
@@ -226,6 +237,23 @@ public final class ConversionChain {
         }
 
         /**
+         * Uses a Molodensky shift (EPSG 9604, or abridged 9605) from source frame to target frame instead of a
+         * registry path, in the geodetic domain. Its ellipsoids must be those of the two frames.
+         *
+         * @param parameterSource who published the translations, shown in the listing
+         * @param accuracyMetres their stated accuracy
+         */
+        public Builder molodensky(Molodensky m, String parameterSource, double accuracyMetres) {
+            this.molodensky = Objects.requireNonNull(m, "molodensky");
+            this.molodenskySource = Objects.requireNonNull(parameterSource, "parameterSource");
+            if (!(accuracyMetres >= 0) || Double.isInfinite(accuracyMetres)) {
+                throw new IllegalArgumentException("accuracy must be finite and >= 0, got " + accuracyMetres);
+            }
+            this.molodenskyAccuracy = accuracyMetres;
+            return this;
+        }
+
+        /**
          * The chain.
          *
          * @throws io.geotick.transforms.MissingEpochException if a time-dependent step has no epoch
@@ -235,57 +263,103 @@ public final class ConversionChain {
         public ConversionChain build() {
             Objects.requireNonNull(source, "source system (from)");
             Objects.requireNonNull(target, "target system (to)");
-            if (userHelmert != null && grid != null) {
-                throw new IllegalArgumentException("give either user Helmert parameters or a grid shift, not both");
+            int shifts = (userHelmert != null ? 1 : 0) + (grid != null ? 1 : 0) + (molodensky != null ? 1 : 0);
+            if (shifts > 1) {
+                throw new IllegalArgumentException("give one of user Helmert parameters, a grid shift or a Molodensky"
+                    + " shift, not " + shifts);
             }
-            boolean needGeoid = source.height() == HeightKind.ORTHOMETRIC
-                || target.height() == HeightKind.ORTHOMETRIC;
+            // The layers of each end: a site grid on its base, a map grid on geodetic coordinates.
+            List<Op> head = new ArrayList<>();
+            List<Op> tail = new ArrayList<>();
+            CoordinateSystem s = source;
+            CoordinateSystem t = target;
+            if (s.kind() == CoordinateKind.SITE) {
+                head.add(new SiteStep(s.site().orElseThrow(), false));
+                s = s.site().orElseThrow().base();
+            }
+            if (t.kind() == CoordinateKind.SITE) {
+                tail.add(0, new SiteStep(t.site().orElseThrow(), true));
+                t = t.site().orElseThrow().base();
+            }
+            boolean layered = s != source || t != target || s.kind() == CoordinateKind.PROJECTED
+                || t.kind() == CoordinateKind.PROJECTED;
+            List<Op> ops = new ArrayList<>(head);
+            if (!(layered && s.equals(t) && shifts == 0)) {
+                if (s.kind() == CoordinateKind.PROJECTED) {
+                    ops.add(new ProjectionStep(s.grid().orElseThrow(), false));
+                    s = s.core();
+                }
+                if (t.kind() == CoordinateKind.PROJECTED) {
+                    tail.add(0, new ProjectionStep(t.grid().orElseThrow(), true));
+                    t = t.core();
+                }
+                ops.addAll(core(s, t));
+            }
+            ops.addAll(tail);
+            return new ConversionChain(source, target, Optional.ofNullable(epoch), ops);
+        }
+
+        /** The steps between two core systems (ECEF or geodetic). */
+        private List<Op> core(CoordinateSystem s, CoordinateSystem t) {
+            boolean needGeoid = s.height() == HeightKind.ORTHOMETRIC || t.height() == HeightKind.ORTHOMETRIC;
             if (needGeoid && geoid == null) {
-                throw new IllegalArgumentException("orthometric heights (" + (source.height()
-                    == HeightKind.ORTHOMETRIC ? source : target) + ") need a geoid model; none was given");
+                throw new IllegalArgumentException("orthometric heights (" + (s.height()
+                    == HeightKind.ORTHOMETRIC ? s : t) + ") need a geoid model; none was given");
             }
             List<Op> ops = new ArrayList<>();
-            if (source.height() == HeightKind.ORTHOMETRIC) {
+            if (s.height() == HeightKind.ORTHOMETRIC) {
                 ops.add(geoid.toEllipsoidal());
             }
-            boolean sameFrame = source.frame().equals(target.frame());
-            if (grid != null) {
-                if (source.kind() == CoordinateKind.ECEF) {
-                    ops.add(Ops.toGeodetic(source.frame()));
+            boolean sameFrame = s.frame().equals(t.frame());
+            if (grid != null || molodensky != null) {
+                if (molodensky != null) {
+                    checkEllipsoid("source", molodensky.sourceEllipsoid(), s);
+                    checkEllipsoid("target", molodensky.targetEllipsoid(), t);
                 }
-                ops.add(grid);
-                if (target.kind() == CoordinateKind.ECEF) {
-                    ops.add(Ops.toEcef(target.frame()));
+                if (s.kind() == CoordinateKind.ECEF) {
+                    ops.add(Ops.toGeodetic(s.frame()));
+                }
+                ops.add(grid != null ? grid : MolodenskyStep.of(molodensky, s.frame().name(), t.frame().name(),
+                    molodenskySource, molodenskyAccuracy));
+                if (t.kind() == CoordinateKind.ECEF) {
+                    ops.add(Ops.toEcef(t.frame()));
                 }
             } else {
                 List<Op> shift = new ArrayList<>();
                 if (userHelmert != null) {
-                    StepDescription d = userDescription(source + " → " + target, userHelmert, userSource,
+                    StepDescription d = userDescription(s + " → " + t, userHelmert, userSource,
                         userAccuracy, false);
-                    StepDescription di = userDescription(target + " → " + source, userHelmert, userSource,
+                    StepDescription di = userDescription(t + " → " + s, userHelmert, userSource,
                         userAccuracy, true);
                     shift.add(Ops.geocentric(userHelmert, d, di));
                 } else if (!sameFrame) {
-                    FrameTransformation ft = epoch == null ? registry.transformation(source.frame(), target.frame())
-                        : registry.transformation(source.frame(), target.frame(), epoch);
-                    for (FrameStep s : ft.steps()) {
-                        shift.add(frameOp(s));
+                    FrameTransformation ft = epoch == null ? registry.transformation(s.frame(), t.frame())
+                        : registry.transformation(s.frame(), t.frame(), epoch);
+                    for (FrameStep st : ft.steps()) {
+                        shift.add(frameOp(st));
                     }
                 }
-                boolean needEcef = !shift.isEmpty() || source.kind() != target.kind()
-                    || !source.frame().ellipsoid().equals(target.frame().ellipsoid());
-                if (needEcef && source.kind() == CoordinateKind.GEODETIC) {
-                    ops.add(Ops.toEcef(source.frame()));
+                boolean needEcef = !shift.isEmpty() || s.kind() != t.kind()
+                    || !s.frame().ellipsoid().equals(t.frame().ellipsoid());
+                if (needEcef && s.kind() == CoordinateKind.GEODETIC) {
+                    ops.add(Ops.toEcef(s.frame()));
                 }
                 ops.addAll(shift);
-                if (needEcef && target.kind() == CoordinateKind.GEODETIC) {
-                    ops.add(Ops.toGeodetic(target.frame()));
+                if (needEcef && t.kind() == CoordinateKind.GEODETIC) {
+                    ops.add(Ops.toGeodetic(t.frame()));
                 }
             }
-            if (target.height() == HeightKind.ORTHOMETRIC) {
+            if (t.height() == HeightKind.ORTHOMETRIC) {
                 ops.add(geoid.toOrthometric());
             }
-            return new ConversionChain(source, target, Optional.ofNullable(epoch), ops);
+            return ops;
+        }
+
+        private static void checkEllipsoid(String end, Ellipsoid e, CoordinateSystem c) {
+            if (!e.equals(c.frame().ellipsoid())) {
+                throw new IllegalArgumentException("the Molodensky " + end + " ellipsoid " + e.name() + " is not the"
+                    + " ellipsoid of " + c + " (" + c.frame().ellipsoid().name() + ")");
+            }
         }
 
         private static Op frameOp(FrameStep s) {

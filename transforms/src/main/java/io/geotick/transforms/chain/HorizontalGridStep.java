@@ -18,9 +18,11 @@ final class HorizontalGridStep implements Op {
         this.description = new StepDescription(forward ? grid.systemFrom() + " → " + grid.systemTo()
             : grid.systemTo() + " → " + grid.systemFrom(),
             "NTv2 grid shift, bilinear" + (forward ? "" : ", reverse by iteration to < 1e-9°"),
-            OptionalInt.of(9615), OptionalInt.empty(), List.of(), "NTv2 file " + grid.name(), 0,
-            List.of("accuracy is the grid's own (per-node accuracy columns; see Ntv2Grid.shiftAt);"
-                + " heights pass unchanged"));
+            OptionalInt.of(9615), OptionalInt.empty(), List.of(), "NTv2 file " + grid.name() + " (SYSTEM_F "
+                + grid.systemFrom() + ", SYSTEM_T " + grid.systemTo() + ", " + grid.subgridNames().size() + " subgrid"
+                + (grid.subgridNames().size() == 1 ? "" : "s") + ")", 0,
+            List.of("the accuracy is the grid's own: an NTv2 file states it per node (its accuracy columns), not as"
+                + " one figure, so none is listed here; the shift is horizontal only: heights pass unchanged"));
     }
 
     @Override

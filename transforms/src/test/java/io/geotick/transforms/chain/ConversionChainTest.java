@@ -145,6 +145,7 @@ class ConversionChainTest {
         assertThat(CoordinateSystem.parse("geodetic@etrf2000", r).toString()).isEqualTo("geodetic@ETRF2000");
         assertThatThrownBy(() -> CoordinateSystem.parse("utm@ED50", r)).hasMessageContaining("utm");
         assertThatThrownBy(() -> CoordinateSystem.parse("ecef", r)).hasMessageContaining("KIND@FRAME");
-        assertThat(Arrays.asList(CoordinateKind.values())).hasSize(2);
+        assertThat(Arrays.asList(CoordinateKind.values())).containsExactly(CoordinateKind.ECEF, CoordinateKind.GEODETIC,
+            CoordinateKind.PROJECTED, CoordinateKind.SITE);
     }
 }
