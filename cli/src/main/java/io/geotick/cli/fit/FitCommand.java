@@ -56,6 +56,9 @@ import picocli.CommandLine.Spec;
         "ecef@ETRF2000). With --from, the saved model can be used as a system in",
         "geotick coord: --to site:SITE.json (and --from site:SITE.json, through its inverse).",
         "A fitted grid is valid inside the area of its control points; outside it errors grow.",
+        "Units: source values are in the --from system's unit (an EPSG grid in US survey",
+        "feet takes ftUS, as geotick coord prints it); the report's m labels (translations,",
+        "residuals, sigma0, rms) stand for the site grid's own unit, metres in the usual case.",
         "",
         "Example (invented file): geotick fit --model similarity --from utm:30N@ETRF2000 \\",
         "    -o quay.json quay-marks.csv",
@@ -100,6 +103,7 @@ public final class FitCommand implements Callable<Integer> {
     public Integer call() {
         SiteModelKind kind = kind(model);
         String source = "";
+        String sourceUnitNote = "";
         if (from != null) {
             CoordinateSystemSpec s = CoordinateSystemSpec.parse(from);
             if (s.text().equals("utm")) {
@@ -110,6 +114,13 @@ public final class FitCommand implements Callable<Integer> {
                 throw new UserInputException("--from '" + from + "': a site model cannot start from another site grid");
             }
             source = s.text();
+            // A grid in feet: the model maps the values as typed, in that unit (as `coord --to site:` feeds
+            // them); what the report labels m is in the site grid's own unit, metres in the usual case.
+            io.geotick.cli.coord.Unit u = s.axes().get(0).unit();
+            if (u != io.geotick.cli.coord.Unit.METRE && u != io.geotick.cli.coord.Unit.DEGREE) {
+                sourceUnitNote = "note         the --from values are in " + u.symbol() + " (the unit of " + s.text()
+                    + "); the values labelled m below are in the site grid's own unit";
+            }
         }
         FitOptions options = FitOptions.defaults();
         if (threshold != null) {
@@ -145,6 +156,9 @@ public final class FitCommand implements Callable<Integer> {
             }
             out.println(Json.write(n));
         } else {
+            if (!sourceUnitNote.isEmpty()) {
+                out.println(sourceUnitNote);
+            }
             out.print(text(m, excluded));
             if (output != null) {
                 out.println("model written to " + output);

@@ -80,6 +80,19 @@ class FitCommandTest {
     }
 
     @Test
+    void sourceInFeetIsNotedInTheReport(@TempDir Path dir) throws Exception {
+        // EPSG:2263 is in US survey feet (its definition, as Proj4J's bundled EPSG file carries it); the pairs
+        // are the invented exact case, read as feet. The fit maps the values as typed, so the report says
+        // which unit the --from values are in and that its m labels are the site grid's own unit.
+        Path csv = pairs(dir, false, false);
+        CliRun feet = CliRun.of("fit", "--model", "similarity", "--from", "EPSG:2263", csv.toString());
+        assertThat(feet.exitCode()).as(feet.err()).isZero();
+        assertThat(feet.out()).startsWith("note         the --from values are in ftUS (the unit of EPSG:2263)");
+        CliRun metres = CliRun.of("fit", "--model", "similarity", "--from", "utm:31N", csv.toString());
+        assertThat(metres.out()).doesNotContain("note ");
+    }
+
+    @Test
     void badRowsAreNamedByLineAndField(@TempDir Path dir) throws Exception {
         Path p = dir.resolve("bad.csv");
         Files.writeString(p, "id,easting,northing,site_x,site_y\nQ1,450120,5700080,1,2\nQ2,abc,5700030,3,4\n\n"
