@@ -257,6 +257,7 @@ public final class Conversion {
         private Optional<UserHelmert> helmert = Optional.empty();
         private Optional<GeoidGrid> geoid = Optional.empty();
         private Optional<Ntv2Grid> ntv2 = Optional.empty();
+        private boolean ntv2Reverse;
         private Optional<UserMolodensky> molodensky = Optional.empty();
         private final List<String> extraWarnings = new ArrayList<>();
 
@@ -292,6 +293,12 @@ public final class Conversion {
         /** An NTv2 grid shift from the source frame to the target frame ({@code --ntv2}). */
         public Builder ntv2(Ntv2Grid g) {
             this.ntv2 = Optional.of(g);
+            return this;
+        }
+
+        /** The NTv2 grid applied against its direction, SYSTEM_T to SYSTEM_F ({@code --ntv2-reverse}). */
+        public Builder ntv2Reverse(boolean reverse) {
+            this.ntv2Reverse = reverse;
             return this;
         }
 
@@ -444,7 +451,13 @@ public final class Conversion {
             helmert.ifPresent(h -> b.helmert(h.helmert(), "your own parameters (--helmert"
                 + (h.accuracyMetres().isPresent() ? ", accuracy from --helmert-accuracy)"
                 : "); accuracy not stated (give --helmert-accuracy)"), h.accuracyMetres().orElse(0)));
-            ntv2.ifPresent(b::horizontalGrid);
+            ntv2.ifPresent(g -> {
+                if (ntv2Reverse) {
+                    b.horizontalGridReverse(g);
+                } else {
+                    b.horizontalGrid(g);
+                }
+            });
             molodensky.ifPresent(m -> b.molodensky(m.between(s.ellipsoid(), t.ellipsoid()), "your own translations"
                 + " (--molodensky" + (m.accuracyMetres().isPresent() ? ", accuracy from --molodensky-accuracy)"
                 : "); accuracy not stated (give --molodensky-accuracy)"), m.accuracyMetres().orElse(0)));

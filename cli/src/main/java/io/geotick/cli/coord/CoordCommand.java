@@ -36,7 +36,7 @@ import picocli.CommandLine.Spec;
     sortOptions = false,
     customSynopsis = {"geotick coord --from SYS --to SYS [--ellipsoid NAME] [--epoch EPOCH]",
         "      [--helmert TX,TY,TZ,RX,RY,RZ,DS --convention CONV [--helmert-accuracy M]",
-        "       | --ntv2 FILE.gsb",
+        "       | --ntv2 FILE.gsb [--ntv2-reverse]",
         "       | --molodensky DX,DY,DZ [--abridged] [--molodensky-accuracy M]]",
         "      [--geoid FILE.isg] [--explain] [--json] [--] V1 V2 V3"},
     description = {
@@ -89,7 +89,8 @@ import picocli.CommandLine.Spec;
         "                   (its SYSTEM_F to SYSTEM_T), from the --from frame to the",
         "                   --to frame, bilinear as the NTv2 format prescribes; heights",
         "                   pass through unchanged; a point outside the grid is an",
-        "                   error, never passed through unshifted;",
+        "                   error, never passed through unshifted; --ntv2-reverse",
+        "                   applies it from SYSTEM_T to SYSTEM_F instead (by iteration);",
         "  --molodensky     Molodensky (EPSG 9604) or, with --abridged, abridged",
         "                   Molodensky (9605) from the --from ellipsoid to the --to",
         "                   ellipsoid, with your translations DX,DY,DZ in metres; a",
@@ -193,6 +194,11 @@ public final class CoordCommand implements Callable<Integer> {
             + "No grid is built in.")
     Path ntv2;
 
+    @Option(names = "--ntv2-reverse",
+        description = "With --ntv2: apply the grid against its direction, from its SYSTEM_T to its SYSTEM_F "
+            + "(the forward shift inverted by iteration to < 1e-9 deg), for a grid published one way only.")
+    boolean ntv2Reverse;
+
     @Option(names = "--molodensky", paramLabel = "DX,DY,DZ",
         description = "Your own geocentric translations DX,DY,DZ in metres for a Molodensky shift (EPSG 9604) "
             + "from the --from ellipsoid to the --to ellipsoid (each end's frame, or --ellipsoid at both), in "
@@ -239,7 +245,9 @@ public final class CoordCommand implements Callable<Integer> {
                 throw new UserInputException("--ntv2 and " + (helmert != null ? "--helmert" : "--molodensky")
                     + " are two datum shifts; give one");
             }
-            b.ntv2(Ntv2Grid.read(ntv2));
+            b.ntv2(Ntv2Grid.read(ntv2)).ntv2Reverse(ntv2Reverse);
+        } else if (ntv2Reverse) {
+            throw new UserInputException("--ntv2-reverse needs --ntv2 FILE.gsb");
         }
         if (geoid != null) {
             Conversion.checkGeoidUse(source, target);

@@ -50,6 +50,26 @@ class CoordShiftOptionsTest {
     }
 
     @Test
+    void ntv2ReverseUndoesTheForwardShift(@TempDir Path dir) throws Exception {
+        Path g = grid(dir, ByteOrder.BIG_ENDIAN);
+        // The reverse of the hand-computed forward point (see WANT_LAT/WANT_LON) lands back on the input: the
+        // reverse is the forward inverted by iteration to < 1e-9° (NTv2 Developer's Guide: the grid is one-way).
+        CliRun r = CliRun.of("coord", "--from", "geodetic@ETRF2000", "--to", "geodetic@ED50", "--ntv2", g.toString(),
+            "--ntv2-reverse", "--json", "--explain", Double.toString(WANT_LAT), Double.toString(WANT_LON), "650");
+        assertThat(r.err()).isEmpty();
+        assertThat(r.exitCode()).isZero();
+        JsonNode j = Json.MAPPER.readTree(r.out());
+        assertThat(j.get("lat").asDouble()).isCloseTo(40.42, within(1e-9));
+        assertThat(j.get("lon").asDouble()).isCloseTo(-3.70, within(1e-9));
+        assertThat(j.get("h").asDouble()).isEqualTo(650.0);
+        assertThat(j.get("steps").get(0).get("name").asText()).isEqualTo("ETRF2000 → ED50");
+        CliRun alone = CliRun.of("coord", "--from", "geodetic@ETRF2000", "--to", "geodetic@ED50", "--ntv2-reverse",
+            LAT, LON, "650");
+        assertThat(alone.exitCode()).isEqualTo(2);
+        assertThat(alone.err()).contains("--ntv2-reverse needs --ntv2");
+    }
+
+    @Test
     void ntv2ShiftMatchesHandComputedBilinear(@TempDir Path dir) throws Exception {
         for (ByteOrder order : List.of(ByteOrder.BIG_ENDIAN, ByteOrder.LITTLE_ENDIAN)) {
             Path g = grid(dir, order);

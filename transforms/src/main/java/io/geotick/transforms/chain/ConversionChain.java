@@ -237,6 +237,16 @@ public final class ConversionChain {
         }
 
         /**
+         * Uses an NTv2 grid in reverse, from its SYSTEM_T to its SYSTEM_F, as the shift from source frame to
+         * target frame: the forward shift inverted by iteration to &lt; 1e-9° (see {@link
+         * io.geotick.transforms.grid.Ntv2Grid#inverse}). For a grid published in one direction only.
+         */
+        public Builder horizontalGridReverse(io.geotick.transforms.grid.Ntv2Grid ntv2) {
+            this.grid = new HorizontalGridStep(Objects.requireNonNull(ntv2, "grid"), false);
+            return this;
+        }
+
+        /**
          * Uses a Molodensky shift (EPSG 9604, or abridged 9605) from source frame to target frame instead of a
          * registry path, in the geodetic domain. Its ellipsoids must be those of the two frames.
          *
