@@ -341,7 +341,7 @@ public final class Conversion {
                 CoordinateSystemSpec without = sf ? target : source;
                 throw new UserInputException("'" + with + "' " + (with.frameImplied() ? "implies frame "
                     + with.frame().orElseThrow().name() : "names a frame") + " but '" + without + "' does not; give a"
-                    + " frame at both ends (e.g. " + without + "@" + with.frame().orElseThrow().name()
+                    + " frame at both ends (e.g. " + without + "@" + typeable(with.frame().orElseThrow())
                     + " for the same frame) or at neither");
             }
             for (CoordinateSystemSpec end : List.of(source, target)) {
@@ -515,5 +515,13 @@ public final class Conversion {
         public List<ExplainedStep> steps() {
             return listed;
         }
+    }
+
+    /** A frame's name as it can be typed in a shell: the first alias without spaces if the name has one. */
+    static String typeable(io.geotick.transforms.frames.Frame f) {
+        if (!f.name().contains(" ")) {
+            return f.name();
+        }
+        return f.aliases().stream().filter(a -> !a.contains(" ") && !a.contains(":")).findFirst().orElse("'" + f.name() + "'");
     }
 }

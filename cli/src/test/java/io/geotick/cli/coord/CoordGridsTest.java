@@ -222,6 +222,10 @@ class CoordGridsTest {
         CliRun bare = coord("--from", "geodetic", "--to", "EPSG:32631", "52", "3.5", "0");
         assertThat(bare.exitCode()).isEqualTo(2);
         assertThat(bare.err()).contains("implies frame WGS 84");
+        // The hint is typeable in a shell: the frame's alias without spaces.
+        assertThat(bare.err()).contains("geodetic@WGS84 for the same frame");
+        CliRun bng = coord("--from", "geodetic", "--to", "EPSG:27700", "52", "-1.5", "0");
+        assertThat(bng.err()).contains("implies frame OSGB 1936").contains("geodetic@OSGB36 for the same frame");
     }
 
     @Test
