@@ -10,7 +10,15 @@ import io.geotick.transforms.height.GeoidGrid;
 import io.geotick.transforms.helmert.Helmert;
 import io.geotick.transforms.helmert.HelmertParameters;
 import io.geotick.transforms.helmert.RotationConvention;
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.InputStreamReader;
 import java.io.PrintWriter;
+import java.io.Reader;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -221,8 +229,19 @@ public final class CoordCommand implements Callable<Integer> {
     @Option(names = "--explain", description = "List every step after the result (with --json: \"steps\").")
     boolean explain;
 
-    @Option(names = "--json", description = "Print one JSON object instead of text.")
+    @Option(names = "--json", description = "Print one JSON object instead of text (with --input: one object per "
+        + "row, NDJSON).")
     boolean json;
+
+    @Option(names = "--input", paramLabel = "FILE",
+        description = "Convert every row of a CSV file with a header row ('-': standard input) instead of one "
+            + "point: value columns named like the --from system's JSON keys (lat,lon,h | x,y,z | "
+            + "easting,northing[,h] ...), other columns passed through. Output: CSV (or NDJSON with --json).")
+    String input;
+
+    @Option(names = "--output", paramLabel = "FILE",
+        description = "With --input: write the rows to FILE instead of standard output ('-': standard output).")
+    String output;
 
     @Parameters(paramLabel = "V", arity = "0..*", description = "The point's three values in the --from system.")
     List<String> values = new ArrayList<>();
@@ -253,6 +272,22 @@ public final class CoordCommand implements Callable<Integer> {
             Conversion.checkGeoidUse(source, target);
             b.geoid(GeoidGrid.read(geoid));
         }
+        if (input == null && output != null) {
+            throw new UserInputException("--output applies to --input FILE; a single point is printed on standard"
+                + " output");
+        }
+        if (input != null) {
+            if (!values.isEmpty()) {
+                throw new UserInputException("with --input the values come from the file; drop the values given on"
+                    + " the command line (" + values.stream().map(v -> "'" + v + "'")
+                        .collect(java.util.stream.Collectors.joining(" ")) + ")");
+            }
+            if (explain) {
+                throw new UserInputException("--explain lists the steps of one point and is not used with --input;"
+                    + " run it on one point of the file");
+            }
+            return stream(b.build());
+        }
         ConvertedPoint result = b.build().convert(values);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
@@ -265,6 +300,49 @@ public final class CoordCommand implements Callable<Integer> {
             }
         }
         out.flush();
+        return ExitCode.OK;
+    }
+
+    /**
+     * The batch mode: every row of {@code --input} through the one conversion (see {@link RowStream}). Exit 0
+     * if every row converted, {@link ExitCode#PARTIAL} with a one-line summary on stderr if any became an
+     * error row.
+     */
+    private int stream(Conversion conversion) {
+        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter stdout = spec.commandLine().getOut();
+        boolean toStdout = output == null || output.equals("-");
+        String outName = toStdout ? "standard output" : output;
+        RowStream.Sink sink = toStdout ? () -> stdout
+            : () -> Files.newBufferedWriter(Path.of(output), StandardCharsets.UTF_8);
+        boolean fromStdin = input.equals("-");
+        String inName = fromStdin ? "standard input" : input;
+        RowStream.Summary s;
+        Writer[] opened = new Writer[1];
+        RowStream.Sink tracked = () -> opened[0] = sink.open();
+        try (Reader in = fromStdin ? new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8))
+                : Files.newBufferedReader(Path.of(input), StandardCharsets.UTF_8)) {
+            try {
+                s = RowStream.of(conversion, json).run(in, inName, tracked, outName,
+                    w -> err.println("geotick: warning: " + w));
+            } finally {
+                if (opened[0] != null && !toStdout) {
+                    opened[0].close();
+                }
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException((opened[0] == null ? "cannot read " + inName : "cannot write " + outName)
+                + ": " + RowStream.reason(e), e);
+        }
+        if (toStdout && stdout.checkError()) {
+            throw new UncheckedIOException("cannot write standard output", new IOException("write failed"));
+        }
+        if (s.failed() > 0) {
+            err.println("geotick: " + s.failed() + " of " + s.rows() + " rows failed");
+            err.flush();
+            return ExitCode.PARTIAL;
+        }
+        err.flush();
         return ExitCode.OK;
     }
 
