@@ -31,7 +31,8 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code geotick coord}: converts one point between coordinate systems.
+ * {@code geotick coord}: converts one point between coordinate systems, or with {@code --input} every row of a
+ * CSV file through the same conversion ({@link RowStream}).
  *
  * <p>The work is split so that each part can grow on its own: {@link SystemSpecParser} reads the SYS
  * texts into {@link CoordinateSystemSpec}s (with their frames), {@link Conversion} takes the point through

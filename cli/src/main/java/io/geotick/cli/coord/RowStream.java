@@ -32,7 +32,7 @@ import java.util.stream.Collectors;
  *
  * <p><b>Input.</b> CSV with a header row (read by Jackson's CSV parser; empty lines are not rows). The
  * columns named like the source system's JSON keys ({@code lat,lon,h}, {@code x,y,z},
- * {@code easting,northing,h} …, matched exactly after trimming the header name) carry the values, in any
+ * {@code easting,northing,h} …, matched exactly after trimming the header name and a byte-order mark) carry the values, in any
  * column order; spaces around a value are ignored. A grid source may leave out the {@code h} column: the
  * height is then unknown, as with E N alone in the single-point mode. Every other column is passed through
  * unchanged, in its order. Duplicate names and pass-through names that would collide with an output column
@@ -284,8 +284,9 @@ final class RowStream {
             String where = name + ", line " + line + " (header): ";
             List<String> names = new ArrayList<>(header.length);
             Set<String> seen = new HashSet<>();
-            for (String h : header) {
-                String n = h.strip();
+            for (int i = 0; i < header.length; i++) {
+                // A byte-order mark (spreadsheet exports write one) is not part of the first name.
+                String n = (i == 0 && header[i].startsWith("\uFEFF") ? header[i].substring(1) : header[i]).strip();
                 if (!seen.add(n)) {
                     throw new UserInputException(where + "column '" + n + "' appears twice");
                 }
