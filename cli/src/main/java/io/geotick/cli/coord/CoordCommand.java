@@ -48,10 +48,11 @@ import picocli.CommandLine.Spec;
         "       | --ntv2 FILE.gsb [--ntv2-reverse]",
         "       | --molodensky DX,DY,DZ [--abridged] [--molodensky-accuracy M]]",
         "      [--geoid FILE.isg] [--explain] [--json] [--] V1 V2 V3",
-        "geotick coord --from SYS --to SYS [same options] --input FILE|- [--output FILE]",
-        "      [--json]"},
+        "       geotick coord --from SYS --to SYS [same options] --input FILE|-",
+        "      [--output FILE] [--json]"},
     description = {
-        "Convert one point between coordinate systems and reference frames.",
+        "Convert one point, or every row of a CSV file (--input), between coordinate",
+        "systems and reference frames.",
         "",
         "Systems (SYS) and their values V1 V2 V3, typed and printed in this order:",
         "  geodetic        latitude (deg, north positive), longitude (deg, east",
@@ -348,6 +349,10 @@ public final class CoordCommand implements Callable<Integer> {
             : () -> Files.newBufferedWriter(Path.of(output), StandardCharsets.UTF_8);
         boolean fromStdin = input.equals("-");
         String inName = fromStdin ? "standard input" : input;
+        if (!fromStdin && !toStdout && sameFile(Path.of(input), Path.of(output))) {
+            // Opening the output would empty the input before it is read.
+            throw new UserInputException("--output " + output + " is the --input file; write to another file");
+        }
         RowStream.Summary s;
         Writer[] opened = new Writer[1];
         RowStream.Sink tracked = () -> opened[0] = sink.open();
@@ -375,6 +380,15 @@ public final class CoordCommand implements Callable<Integer> {
         }
         err.flush();
         return ExitCode.OK;
+    }
+
+    private static boolean sameFile(Path a, Path b) {
+        try {
+            return Files.exists(b) ? Files.isSameFile(a, b) : a.toAbsolutePath().normalize().equals(b.toAbsolutePath()
+                .normalize());
+        } catch (IOException e) {
+            return false; // the input cannot be read: reported when it is opened
+        }
     }
 
     /** The coordinate epoch; a number outside the supported range is named as such, not as unreadable. */

@@ -332,6 +332,10 @@ class CoordStreamTest {
         CliRun explain = stream(GEODETIC_TO_ECEF, "--input", ok.toString(), "--explain");
         assertThat(explain.exitCode()).isEqualTo(ExitCode.USAGE);
         assertThat(explain.err()).contains("--explain");
+        CliRun same = stream(GEODETIC_TO_ECEF, "--input", ok.toString(), "--output", ok.toString());
+        assertThat(same.exitCode()).isEqualTo(ExitCode.USAGE);
+        assertThat(same.err()).contains("is the --input file");
+        assertThat(Files.readString(ok)).isEqualTo("lat,lon,h\n1,2,3\n");
         CliRun output = stream(GEODETIC_TO_ECEF, "--output", dir.resolve("o.csv").toString(), "1", "2", "3");
         assertThat(output.exitCode()).isEqualTo(ExitCode.USAGE);
         assertThat(output.err()).contains("--output applies to --input");
