@@ -187,7 +187,8 @@ interface SystemAdapter {
                     u = Utm.forPosition(g[0], g[1], ellipsoid);
                 } catch (io.geotick.transforms.projection.ProjectionDomainException e) {
                     throw new io.geotick.transforms.projection.ProjectionDomainException(e.getMessage()
-                        + (Math.abs(g[0]) > 80 ? "; --to " + (g[0] > 0 ? "ups:N" : "ups:S") + " covers the point" : ""));
+                        + (Math.abs(g[0]) > 80 && Math.abs(g[0]) <= 90 ? "; --to " + (g[0] > 0 ? "ups:N" : "ups:S")
+                        + " covers the point" : ""));
                 }
                 proj = u;
                 method = ProjectionMethod.utm(u);

@@ -121,6 +121,10 @@ class CoordGridsTest {
         CliRun utm = coord("--from", "geodetic", "--to", "utm", "86", "20", "0");
         assertThat(utm.exitCode()).isEqualTo(2);
         assertThat(utm.err()).contains("latitude 86.0").contains("outside the UTM limits").contains("--to ups:N");
+        // Not a latitude at all: the plain range error, with no UPS hint.
+        CliRun notLat = coord("--from", "geodetic", "--to", "utm", "91", "20", "0");
+        assertThat(notLat.exitCode()).isEqualTo(2);
+        assertThat(notLat.err()).contains("latitude 91.0° is outside [-90°, 90°]").doesNotContain("ups");
         CliRun ups = coord("--from", "geodetic", "--to", "ups:N", "80", "3", "0");
         assertThat(ups.exitCode()).isEqualTo(2);
         assertThat(ups.err()).contains("latitude 80.0").contains("83.5");

@@ -128,6 +128,7 @@ public final class Utm extends KernelProjection {
      * @throws ProjectionDomainException if the latitude is outside 80°S–84°N or a value is not a number
      */
     public static int zoneNumber(double latitude, double longitude) {
+        Checks.latitude(latitude); // not a latitude at all (91°, NaN) before "beyond the UTM limits"
         checkLatitude(latitude);
         Checks.longitude(longitude);
         double lon = Math.IEEEremainder(longitude, 360.0);
