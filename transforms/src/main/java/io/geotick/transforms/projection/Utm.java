@@ -128,7 +128,6 @@ public final class Utm extends KernelProjection {
      * @throws ProjectionDomainException if the latitude is outside 80°S–84°N or a value is not a number
      */
     public static int zoneNumber(double latitude, double longitude) {
-        Checks.latitude(latitude); // not a latitude at all (91°, NaN) before "beyond the UTM limits"
         checkLatitude(latitude);
         Checks.longitude(longitude);
         double lon = Math.IEEEremainder(longitude, 360.0);
@@ -180,6 +179,7 @@ public final class Utm extends KernelProjection {
     }
 
     private static void checkLatitude(double latitude) {
+        Checks.latitude(latitude); // not a latitude at all (91°, NaN) before "beyond the UTM limits"
         if (!(latitude >= MIN_LATITUDE && latitude <= MAX_LATITUDE)) {
             throw new ProjectionDomainException("latitude " + latitude + "° is outside the UTM limits "
                 + "80°S to 84°N (use UPS beyond them)");

@@ -30,7 +30,7 @@ class BadInputTest {
                 .isInstanceOf(ProjectionDomainException.class).hasMessageContaining("easting NaN");
             assertThatThrownBy(() -> p.unproject(0, Double.POSITIVE_INFINITY)).as(p.name())
                 .hasMessageContaining("northing Infinity");
-            assertThatThrownBy(() -> p.project(91, 0)).as(p.name()).hasMessageContaining("91.0");
+            assertThatThrownBy(() -> p.project(91, 0)).as(p.name()).hasMessageContaining("91.0° is outside [-90°, 90°]");
             // One family: also an InvalidCoordinateException and an IllegalArgumentException.
             assertThatThrownBy(() -> p.project(Double.NaN, 0)).isInstanceOf(InvalidCoordinateException.class)
                 .isInstanceOf(IllegalArgumentException.class);
