@@ -1,6 +1,7 @@
 package io.geotick.cli.coord;
 
 import io.geotick.cli.Cautions;
+import io.geotick.cli.CsvBatch;
 import io.geotick.cli.ExitCode;
 import io.geotick.cli.UserInputException;
 import io.geotick.geodesy.ellipsoid.Ellipsoids;
@@ -10,15 +11,7 @@ import io.geotick.transforms.height.GeoidGrid;
 import io.geotick.transforms.helmert.Helmert;
 import io.geotick.transforms.helmert.HelmertParameters;
 import io.geotick.transforms.helmert.RotationConvention;
-import java.io.BufferedReader;
-import java.io.IOException;
-import java.io.InputStreamReader;
 import java.io.PrintWriter;
-import java.io.Reader;
-import java.io.UncheckedIOException;
-import java.io.Writer;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -304,16 +297,8 @@ public final class CoordCommand implements Callable<Integer> {
             Conversion.checkGeoidUse(source, target);
             b.geoid(GeoidGrid.read(geoid));
         }
-        if (input == null && output != null) {
-            throw new UserInputException("--output applies to --input FILE; a single point is printed on standard"
-                + " output");
-        }
+        CsvBatch.checkUse(input, output, values, "a single point");
         if (input != null) {
-            if (!values.isEmpty()) {
-                throw new UserInputException("with --input the values come from the file; drop the values given on"
-                    + " the command line (" + values.stream().map(v -> "'" + v + "'")
-                        .collect(java.util.stream.Collectors.joining(" ")) + ")");
-            }
             if (explain) {
                 throw new UserInputException("--explain lists the steps of one point and is not used with --input;"
                     + " run it on one point of the file");
@@ -336,59 +321,15 @@ public final class CoordCommand implements Callable<Integer> {
     }
 
     /**
-     * The batch mode: every row of {@code --input} through the one conversion (see {@link RowStream}). Exit 0
-     * if every row converted, {@link ExitCode#PARTIAL} with a one-line summary on stderr if any became an
-     * error row.
+     * The batch mode: every row of {@code --input} through the one conversion (see {@link RowStream} and
+     * {@link CsvBatch#execute}). Exit 0 if every row converted, {@link ExitCode#PARTIAL} with a one-line summary
+     * on stderr if any became an error row.
      */
     private int stream(Conversion conversion) {
         PrintWriter err = spec.commandLine().getErr();
-        PrintWriter stdout = spec.commandLine().getOut();
-        boolean toStdout = output == null || output.equals("-");
-        String outName = toStdout ? "standard output" : output;
-        RowStream.Sink sink = toStdout ? () -> stdout
-            : () -> Files.newBufferedWriter(Path.of(output), StandardCharsets.UTF_8);
-        boolean fromStdin = input.equals("-");
-        String inName = fromStdin ? "standard input" : input;
-        if (!fromStdin && !toStdout && sameFile(Path.of(input), Path.of(output))) {
-            // Opening the output would empty the input before it is read.
-            throw new UserInputException("--output " + output + " is the --input file; write to another file");
-        }
-        RowStream.Summary s;
-        Writer[] opened = new Writer[1];
-        RowStream.Sink tracked = () -> opened[0] = sink.open();
-        try (Reader in = fromStdin ? new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8))
-                : Files.newBufferedReader(Path.of(input), StandardCharsets.UTF_8)) {
-            try {
-                s = RowStream.of(conversion, json).run(in, inName, tracked, outName,
-                    w -> err.println("geotick: warning: " + w));
-            } finally {
-                if (opened[0] != null && !toStdout) {
-                    opened[0].close();
-                }
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException((opened[0] == null ? "cannot read " + inName : "cannot write " + outName)
-                + ": " + RowStream.reason(e), e);
-        }
-        if (toStdout && stdout.checkError()) {
-            throw new UncheckedIOException("cannot write standard output", new IOException("write failed"));
-        }
-        if (s.failed() > 0) {
-            err.println("geotick: " + s.failed() + " of " + s.rows() + " rows failed");
-            err.flush();
-            return ExitCode.PARTIAL;
-        }
-        err.flush();
-        return ExitCode.OK;
-    }
-
-    private static boolean sameFile(Path a, Path b) {
-        try {
-            return Files.exists(b) ? Files.isSameFile(a, b) : a.toAbsolutePath().normalize().equals(b.toAbsolutePath()
-                .normalize());
-        } catch (IOException e) {
-            return false; // the input cannot be read: reported when it is opened
-        }
+        RowStream rows = RowStream.of(conversion, json);
+        return CsvBatch.execute(input, output, json, spec.commandLine().getOut(), err, rows.expectedHeader(),
+            rows.planner(w -> err.println("geotick: warning: " + w)));
     }
 
     /** The coordinate epoch; a number outside the supported range is named as such, not as unreadable. */

@@ -36,6 +36,36 @@ final class TimeReport {
     static final List<String> ROW_KEYS = List.of("utc", "tai", "tt", "gps", "gst", "bdt", "glonass", "smeared-utc",
         "unix", "ntp", "ptp", "gpss", "mjd", "jd");
 
+    /**
+     * The JSON fields in output order, each with the {@code --to} key whose text row shows it; "" for the fields
+     * kept whatever {@code --to} selects (the input, TAI - UTC, the leap table and the warnings: the lines the
+     * text output always prints). Used by the batch mode to choose its columns.
+     */
+    private static final String[][] FIELD_ROWS = {
+        {"input", ""}, {"input_scale", ""}, {"utc", "utc"}, {"tai", "tai"}, {"tt", "tt"}, {"gps", "gps"},
+        {"gst", "gst"}, {"bdt", "bdt"}, {"glonass", "glonass"}, {"smeared_utc", "smeared-utc"}, {"utc_doy", "utc"},
+        {"gps_week", "gps"}, {"gps_tow", "gps"}, {"gst_week", "gst"}, {"gst_tow", "gst"}, {"bdt_week", "bdt"},
+        {"bdt_tow", "bdt"}, {"gps_seconds", "gpss"}, {"unix", "unix"}, {"ntp", "ntp"}, {"ntp_era", "ntp"},
+        {"ntp_hex", "ntp"}, {"ptp", "ptp"}, {"mjd_utc", "mjd"}, {"jd_utc", "jd"}, {"mjd_tt", "mjd"},
+        {"jd_tt", "jd"}, {"tai_minus_utc", ""}, {"leap_table_source", ""}, {"leap_table_updated", ""},
+        {"leap_table_expires", ""}, {"leap_table_hash", ""}, {"smear_start", "smeared-utc"},
+        {"smear_length", "smeared-utc"}, {"warnings", ""},
+    };
+
+    /**
+     * The names of the JSON fields, in the order of {@link #toJson()}, for the {@code --to} selection
+     * {@code only} (empty: all).
+     */
+    static List<String> fields(Set<String> only) {
+        List<String> out = new ArrayList<>();
+        for (String[] f : FIELD_ROWS) {
+            if (only.isEmpty() || f[1].isEmpty() || only.contains(f[1])) {
+                out.add(f[0]);
+            }
+        }
+        return out;
+    }
+
     private final Map<String, Object> fields = new LinkedHashMap<>();
     private final List<String> warnings = new ArrayList<>();
     private final List<String[]> rows = new ArrayList<>();
