@@ -4,7 +4,6 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.MappingIterator;
 import com.fasterxml.jackson.databind.ObjectReader;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.dataformat.csv.CsvMapper;
@@ -33,23 +32,16 @@ import org.junit.jupiter.api.parallel.ResourceLock;
 class TimeStreamTest {
     private static final CsvMapper CSV = new CsvMapper();
 
-    /** The rows of a CSV text with a header, as maps in column order. */
+    /** The rows of a CSV text with a header, as maps (Jackson's CSV reader). */
     private static List<Map<String, String>> rows(String csv) throws Exception {
-        List<Map<String, String>> rows = new ArrayList<>();
-        try (MappingIterator<Map<String, String>> it = CSV.readerFor(Map.class)
-                .with(CsvSchema.emptySchema().withHeader()).readValues(csv)) {
-            while (it.hasNextValue()) {
-                rows.add(it.nextValue());
-            }
-        }
-        return rows;
+        return CSV.readerFor(Map.class).with(CsvSchema.emptySchema().withHeader())
+            .<Map<String, String>>readValues(csv).readAll();
     }
 
+    /** The header row of a CSV text (Jackson's CSV reader). */
     private static List<String> header(String csv) throws Exception {
-        try (MappingIterator<String[]> it = CSV.readerFor(String[].class).with(CsvSchema.emptySchema())
-                .with(CsvParser.Feature.WRAP_AS_ARRAY).readValues(csv)) {
-            return List.of(it.nextValue());
-        }
+        return List.of(CSV.readerFor(String[].class).with(CsvParser.Feature.WRAP_AS_ARRAY)
+            .<String[]>readValues(csv).next());
     }
 
     private static Path write(Path dir, String name, String text) throws Exception {
