@@ -34,9 +34,9 @@ import picocli.CommandLine.Spec;
  * The leap table, the converter and the reference date are built once for the whole batch.
  */
 @Command(name = "time", mixinStandardHelpOptions = true,
-    customSynopsis = {"geotick time [--in SCALE] [--to SCALE[,SCALE...]] [--json] [--week-bits BITS]",
-        "      [--near DATE] [--leap-file PATH] [--smear-start DURATION]",
-        "      [--smear-length DURATION] [--] VALUE",
+    customSynopsis = {"geotick time [--in SCALE] [--to SCALE[,SCALE...]] [--json]",
+        "      [--week-bits BITS] [--near DATE] [--leap-file PATH]",
+        "      [--smear-start DURATION] [--smear-length DURATION] [--] VALUE",
         "       geotick time [same options] --input FILE|- [--output FILE]"},
     description = {"Convert one timestamp exactly to every time scale and encoding, or every",
         "value of a CSV file (--input).",
