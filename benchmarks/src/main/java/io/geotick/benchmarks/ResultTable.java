@@ -19,12 +19,15 @@ import java.util.Map;
  * <p>Pairing convention: a benchmark method named {@code <variant>_geotick} has as its peer the method
  * {@code <variant>_<library>} of the same class with the same parameters (here the library is
  * {@code proj4j}). The ratio is the peer's time per point divided by geotick's, so 4.0 means geotick
- * converts four times as many points per second. Scores are per point because the array benchmarks
+ * converts four times as many points per second. A variant {@code <variant>Scalar_geotick} without a peer
+ * of its own (geotick's scalar code measured beside its SIMD kernel) is paired with the peer of
+ * {@code <variant>}. Scores are per point because the array benchmarks
  * declare their point count with {@code @OperationsPerInvocation}, which JMH divides out of both the time
  * and the normalised allocation.
  */
 public final class ResultTable {
     private static final String OURS = "geotick";
+    private static final String SCALAR = "Scalar";
 
     private ResultTable() {
     }
@@ -104,9 +107,12 @@ public final class ResultTable {
         for (Row r : rows) {
             String ratio = r.library().equals(OURS) ? "-" : "(peer)";
             if (r.library().equals(OURS) && r.nsPerPoint()) {
+                // A variant without a peer of its own, <v>Scalar (geotick's scalar code beside its SIMD
+                // kernel), is paired with the peer of <v>.
+                String peerVariant = hasPeer(rows, r, r.variant()) || !r.variant().endsWith(SCALAR) ? r.variant()
+                    : r.variant().substring(0, r.variant().length() - SCALAR.length());
                 for (Row peer : rows) {
-                    if (!peer.library().equals(OURS) && peer.nsPerPoint() && peer.variant().equals(r.variant())
-                        && peer.params().equals(r.params()) && className(peer).equals(className(r))) {
+                    if (isPeer(peer, r, peerVariant)) {
                         ratio = String.format(Locale.ROOT, "%.2f× %s", peer.score() / r.score(), peer.library());
                     }
                 }
@@ -125,6 +131,15 @@ public final class ResultTable {
             + " iteration: the fastest measurement iteration (least disturbed on a shared machine); B/point: bytes"
             + " allocated per point (JMH gc profiler); vs peer: the peer's ns/point divided by geotick's (above 1 ="
             + " geotick faster).");
+    }
+
+    private static boolean hasPeer(List<Row> rows, Row r, String variant) {
+        return rows.stream().anyMatch(peer -> isPeer(peer, r, variant));
+    }
+
+    private static boolean isPeer(Row peer, Row r, String variant) {
+        return !peer.library().equals(OURS) && peer.nsPerPoint() && peer.variant().equals(variant)
+            && peer.params().equals(r.params()) && className(peer).equals(className(r));
     }
 
     private static String oneDecimal(double v) {

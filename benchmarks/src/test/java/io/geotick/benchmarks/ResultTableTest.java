@@ -20,6 +20,11 @@ class ResultTableTest {
             "params": { "heights": "surface" },
             "primaryMetric": { "score": 200.0, "scoreError": 4.0, "scorePercentiles": { "0.0": 190.0 },
                                "scoreUnit": "ns/op" },
+            "secondaryMetrics": {} },
+          { "benchmark": "io.geotick.benchmarks.geodesy.EcefToGeodeticBenchmark.arrayScalar_geotick",
+            "params": { "heights": "surface" },
+            "primaryMetric": { "score": 100.0, "scoreError": 2.0, "scorePercentiles": { "0.0": 99.0 },
+                               "scoreUnit": "ns/op" },
             "secondaryMetrics": {} } ]
         """;
 
@@ -32,5 +37,8 @@ class ResultTableTest {
             "| EcefToGeodeticBenchmark.array_geotick | heights=surface | 50.0 | 1.5 | 48.0 | 0.00 | 4.00× proj4j |");
         assertThat(table).contains(
             "| EcefToGeodeticBenchmark.array_proj4j | heights=surface | 200.0 | 4.0 | 190.0 | - | (peer) |");
+        // A <variant>Scalar without a peer of its own is paired with the peer of <variant>.
+        assertThat(table).contains(
+            "| EcefToGeodeticBenchmark.arrayScalar_geotick | heights=surface | 100.0 | 2.0 | 99.0 | - | 2.00× proj4j |");
     }
 }

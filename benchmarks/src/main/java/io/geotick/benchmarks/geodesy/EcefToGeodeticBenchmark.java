@@ -10,6 +10,7 @@ import org.locationtech.proj4j.datum.Ellipsoid;
 import org.locationtech.proj4j.datum.GeocentricConverter;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Fork;
 import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OperationsPerInvocation;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
@@ -31,9 +32,17 @@ import org.openjdk.jmh.infra.Blackhole;
  *   <li>{@code array_*}: all {@value EcefPoints#COUNT} points per operation into an output array:
  *       geotick's array variant; Proj4J in a loop that loads the reused coordinate and stores its result.
  *       Proj4J's output is stored as it comes (radians), geotick's in degrees.</li>
+ *   <li>{@code arrayScalar_geotick}: geotick's array variant with its SIMD kernel turned off
+ *       ({@code -Dgeotick.simd=off}), as a JVM without the vector module runs it; paired with
+ *       {@code array_proj4j}.</li>
  * </ul>
+ *
+ * <p>The forks start with {@code --add-modules jdk.incubator.vector}, so that the array variant runs its
+ * SIMD kernel ({@link io.geotick.geodesy.simd.Simd}); Proj4J and the single-point methods are unaffected by
+ * the flag.
  */
 @State(Scope.Thread)
+@Fork(jvmArgsAppend = "--add-modules=jdk.incubator.vector")
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.NANOSECONDS)
 public class EcefToGeodeticBenchmark {
@@ -84,6 +93,14 @@ public class EcefToGeodeticBenchmark {
     @Benchmark
     @OperationsPerInvocation(EcefPoints.COUNT)
     public double[] array_geotick() {
+        geotick.toGeodetic(ecef, 0, out, 0, EcefPoints.COUNT);
+        return out;
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(EcefPoints.COUNT)
+    @Fork(jvmArgsAppend = {"--add-modules=jdk.incubator.vector", "-Dgeotick.simd=off"})
+    public double[] arrayScalar_geotick() {
         geotick.toGeodetic(ecef, 0, out, 0, EcefPoints.COUNT);
         return out;
     }

@@ -5,6 +5,8 @@ import io.geotick.geodesy.angle.DegreeTrig;
 import io.geotick.geodesy.ellipsoid.Ellipsoid;
 import io.geotick.geodesy.position.EcefPosition;
 import io.geotick.geodesy.position.GeodeticPosition;
+import io.geotick.geodesy.simd.Simd;
+import java.lang.invoke.MethodHandles;
 import java.util.Objects;
 
 /**
@@ -59,19 +61,21 @@ public final class EcefConverter {
      */
     public static final double MAX_COORDINATE = 1e15;
     private final Ellipsoid ellipsoid;
-    private final double a;
-    private final double e2;
+    final double a;
+    final double e2;
     private final double oneMinusE2;
     // Evolute semi-axes (astroid): a e² along the equator, a e²/√(1−e²) along the axis.
-    private final double evoluteP;
-    private final double evoluteZ;
+    final double evoluteP;
+    final double evoluteZ;
     private final double b;
     private final double bOverA;
-    private final double e2a;
-    private final double ep2b;
-    private final double bOverA2;
-    private final double e2aBOverA3;
+    final double e2a;
+    final double ep2b;
+    final double bOverA2;
+    final double e2aBOverA3;
     private static final double DEGREES_PER_RADIAN = 180.0 / Math.PI;
+    /** The SIMD kernel of the array inverse, when {@link Simd#enabled()}; null otherwise. */
+    private final EcefVectorKernel vectorKernel;
 
     private EcefConverter(Ellipsoid ellipsoid) {
         this.ellipsoid = ellipsoid;
@@ -86,11 +90,26 @@ public final class EcefConverter {
         this.ep2b = e2 / oneMinusE2 * b;
         this.bOverA2 = bOverA * bOverA;
         this.e2aBOverA3 = e2a * bOverA * bOverA * bOverA;
+        this.vectorKernel = Simd.enabled() ? loadVectorKernel() : null;
+    }
+
+    /**
+     * Builds the SIMD kernel. Only called when {@link Simd#enabled()}: the kernel's class refers to the
+     * incubating vector module and must not be loaded in a JVM without it.
+     */
+    private EcefVectorKernel loadVectorKernel() {
+        return Simd.load(MethodHandles.lookup(), EcefVectorKernel.class, "io.geotick.geodesy.ecef.EcefVectorKernel",
+            EcefConverter.class, this).orElse(null);
     }
 
     /** A converter on the given ellipsoid. */
     public static EcefConverter of(Ellipsoid ellipsoid) {
         return new EcefConverter(Objects.requireNonNull(ellipsoid, "ellipsoid"));
+    }
+
+    /** Whether the array inverse uses the SIMD kernel (for tests). */
+    boolean vectorised() {
+        return vectorKernel != null;
     }
 
     /** The ellipsoid this converter works on. */
@@ -146,14 +165,27 @@ public final class EcefConverter {
 
     /**
      * Array inverse conversion over interleaved triples (x, y, z) → (φ°, λ°, h); same layout and in-place
-     * rule as {@link #toEcef(double[], int, double[], int, int)}. Allocates nothing.
+     * rule as {@link #toEcef(double[], int, double[], int, int)}. Allocates nothing. When the SIMD kernels
+     * are on ({@link Simd}), blocks of points are converted in vector lanes: heights are bit for bit those
+     * of the scalar code, latitudes and longitudes equal them or, for 0.6 % of them, differ by about an ulp
+     * (the lane arc tangent is within half an ulp plus 5e-18°, the scalar one within half an ulp plus
+     * 1.2e-16°); the accuracy bound above holds for both.
      *
      * @throws InvalidCoordinateException on the first non-finite point or point inside the evolute,
      *     naming its index
      */
     public void toGeodetic(double[] in, int inOffset, double[] out, int outOffset, int count) {
         checkRange(in, inOffset, out, outOffset, count);
-        for (int i = 0; i < count; i++) {
+        if (vectorKernel != null) {
+            vectorKernel.toGeodetic(in, inOffset, out, outOffset, count);
+        } else {
+            toGeodeticScalar(in, inOffset, out, outOffset, 0, count);
+        }
+    }
+
+    /** The scalar array inverse of points {@code from} (inclusive) to {@code to} (exclusive). */
+    void toGeodeticScalar(double[] in, int inOffset, double[] out, int outOffset, int from, int to) {
+        for (int i = from; i < to; i++) {
             int k = inOffset + 3 * i;
             double x = in[k];
             double y = in[k + 1];

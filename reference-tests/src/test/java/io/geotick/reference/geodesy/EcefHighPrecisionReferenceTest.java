@@ -74,9 +74,11 @@ class EcefHighPrecisionReferenceTest {
      */
     static void check(double x, double y, double z, Worst w) {
         GeodeticPosition g = C.toGeodetic(EcefPosition.of(x, y, z));
-        double lat = g.latitude();
-        double lon = g.longitude();
-        double h = g.height();
+        check(x, y, z, g.latitude(), g.longitude(), g.height(), w);
+    }
+
+    /** As {@link #check(double, double, double, Worst)} for a result (φ, λ, h) obtained otherwise. */
+    static void check(double x, double y, double z, double lat, double lon, double h, Worst w) {
         Dfp[] p = forward(lat, lon, h);
         Dfp dx = p[0].subtract(F.newDfp(x));
         Dfp dy = p[1].subtract(F.newDfp(y));
@@ -193,6 +195,32 @@ class EcefHighPrecisionReferenceTest {
     void inverseOnTenThousandRandomPointsIsWithinTheBound() {
         Worst w = runInverse(randomGeodetic());
         assertThat(w.ratio).isLessThanOrEqualTo(1.0);
+    }
+
+    /**
+     * The array variant, which runs the SIMD kernel when the vector module is present (the build's second
+     * test pass), on the same random and edge points, in one call each.
+     */
+    @Test
+    void arrayInverseIsWithinTheBoundToo() {
+        for (List<double[]> set : List.of(randomGeodetic(), edgeGeodetic())) {
+            int n = set.size();
+            double[] ecef = new double[3 * n];
+            for (int i = 0; i < n; i++) {
+                double[] g = set.get(i);
+                EcefPosition e = C.toEcef(GeodeticPosition.of(g[0], g[1], g[2]));
+                ecef[3 * i] = e.x();
+                ecef[3 * i + 1] = e.y();
+                ecef[3 * i + 2] = e.z();
+            }
+            double[] out = new double[3 * n];
+            C.toGeodetic(ecef, 0, out, 0, n);
+            Worst w = new Worst();
+            for (int i = 0; i < n; i++) {
+                check(ecef[3 * i], ecef[3 * i + 1], ecef[3 * i + 2], out[3 * i], out[3 * i + 1], out[3 * i + 2], w);
+            }
+            assertThat(w.ratio).isLessThanOrEqualTo(1.0);
+        }
     }
 
     @Test
