@@ -47,13 +47,17 @@ import org.openjdk.jmh.annotations.Warmup;
  *       parts, since it has no time-dependent transformation: two geocentric 7-parameter shifts whose
  *       parameters are ours evaluated at the epoch, then its geocentric → geodetic conversion.</li>
  * </ul>
+ *
+ * <p>The forks start with {@code --add-modules jdk.incubator.vector}, so that our array variants run their
+ * SIMD kernels ({@link io.geotick.geodesy.simd.Simd}); each {@code <variant>Scalar_geotick} turns them off
+ * ({@code -Dgeotick.simd=off}) and is paired with the same Proj4J peer.
  */
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.NANOSECONDS)
 @State(Scope.Benchmark)
 @Warmup(iterations = 3, time = 1)
 @Measurement(iterations = 5, time = 1)
-@Fork(1)
+@Fork(value = 1, jvmArgsAppend = "--add-modules=jdk.incubator.vector")
 public class DatumShiftBenchmark {
     static final int N = 1000;
     private static final double[] OSGB = {446.448, -125.157, 542.06, 0.15, 0.247, 0.842, -20.489};
@@ -135,6 +139,15 @@ public class DatumShiftBenchmark {
         return out;
     }
 
+    /** The same with the SIMD kernels off, as a JVM without the vector module runs it. */
+    @Benchmark
+    @OperationsPerInvocation(N)
+    @Fork(value = 1, jvmArgsAppend = {"--add-modules=jdk.incubator.vector", "-Dgeotick.simd=off"})
+    public double[] helmertScalar_geotick() {
+        helmert.apply(ecef, 0, out, 0, N);
+        return out;
+    }
+
     /** Proj4J's geocentric 7-parameter shift on the same points, results stored into the same array. */
     @Benchmark
     @OperationsPerInvocation(N)
@@ -160,6 +173,15 @@ public class DatumShiftBenchmark {
         return out;
     }
 
+    /** The same with the SIMD kernels off, as a JVM without the vector module runs it. */
+    @Benchmark
+    @OperationsPerInvocation(N)
+    @Fork(value = 1, jvmArgsAppend = {"--add-modules=jdk.incubator.vector", "-Dgeotick.simd=off"})
+    public double[] osgbToWgs84Scalar_geotick() {
+        osgbToWgs84.convert(geodeticOsgb, 0, out, 0, N);
+        return out;
+    }
+
     /** Proj4J's datum transformation doing the same job, results stored into the same array. */
     @Benchmark
     @OperationsPerInvocation(N)
@@ -180,6 +202,15 @@ public class DatumShiftBenchmark {
     @Benchmark
     @OperationsPerInvocation(N)
     public double[] itrfToEtrf_geotick() {
+        itrfToEtrf.convert(ecefItrf, 0, out, 0, N);
+        return out;
+    }
+
+    /** The same with the SIMD kernels off, as a JVM without the vector module runs it. */
+    @Benchmark
+    @OperationsPerInvocation(N)
+    @Fork(value = 1, jvmArgsAppend = {"--add-modules=jdk.incubator.vector", "-Dgeotick.simd=off"})
+    public double[] itrfToEtrfScalar_geotick() {
         itrfToEtrf.convert(ecefItrf, 0, out, 0, N);
         return out;
     }

@@ -6,6 +6,7 @@ import io.geotick.geodesy.ellipsoid.Ellipsoid;
 import io.geotick.geodesy.position.EcefPosition;
 import io.geotick.geodesy.position.GeodeticPosition;
 import io.geotick.geodesy.simd.Simd;
+import java.lang.invoke.MethodHandle;
 import java.lang.invoke.MethodHandles;
 import java.util.Objects;
 
@@ -74,6 +75,9 @@ public final class EcefConverter {
     final double bOverA2;
     final double e2aBOverA3;
     private static final double DEGREES_PER_RADIAN = 180.0 / Math.PI;
+    /** The SIMD kernel's constructor when {@link Simd#enabled()}, null otherwise. */
+    private static final MethodHandle VECTOR_KERNEL = Simd.kernelConstructor(MethodHandles.lookup(),
+        "io.geotick.geodesy.ecef.EcefVectorKernel", EcefConverter.class).orElse(null);
     /** The SIMD kernel of the array inverse, when {@link Simd#enabled()}; null otherwise. */
     private final EcefVectorKernel vectorKernel;
 
@@ -90,16 +94,8 @@ public final class EcefConverter {
         this.ep2b = e2 / oneMinusE2 * b;
         this.bOverA2 = bOverA * bOverA;
         this.e2aBOverA3 = e2a * bOverA * bOverA * bOverA;
-        this.vectorKernel = Simd.enabled() ? loadVectorKernel() : null;
-    }
-
-    /**
-     * Builds the SIMD kernel. Only called when {@link Simd#enabled()}: the kernel's class refers to the
-     * incubating vector module and must not be loaded in a JVM without it.
-     */
-    private EcefVectorKernel loadVectorKernel() {
-        return Simd.load(MethodHandles.lookup(), EcefVectorKernel.class, "io.geotick.geodesy.ecef.EcefVectorKernel",
-            EcefConverter.class, this).orElse(null);
+        // The cast only runs with the kernels on: the kernel's class needs the vector module.
+        this.vectorKernel = VECTOR_KERNEL == null ? null : (EcefVectorKernel) Simd.newKernel(VECTOR_KERNEL, this);
     }
 
     /** A converter on the given ellipsoid. */

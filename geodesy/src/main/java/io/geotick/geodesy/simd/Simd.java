@@ -44,23 +44,33 @@ public final class Simd {
     }
 
     /**
-     * Builds the kernel class {@code className}, found through the caller's {@code lookup} (so that it may be
-     * package-private), with its constructor taking one {@code argType}, if the kernels are enabled; empty
-     * when they are not, or when the class cannot be linked or built in this JVM (the scalar code then runs).
+     * The constructor of the kernel class {@code className}, found through the caller's {@code lookup} (so
+     * that the class may be package-private) and taking one {@code argType}, with the class initialised; empty
+     * when the kernels are off, or when the class cannot be linked or initialised in this JVM (the scalar code
+     * then runs). Callers keep the handle in a static final field and build kernels with {@link #newKernel}.
      */
-    public static <T> Optional<T> load(MethodHandles.Lookup lookup, Class<T> kernelType, String className,
-            Class<?> argType, Object arg) {
+    public static Optional<MethodHandle> kernelConstructor(MethodHandles.Lookup lookup, String className,
+            Class<?> argType) {
         if (!ENABLED) {
             return Optional.empty();
         }
         try {
             Class<?> type = lookup.findClass(className);
-            MethodHandle constructor = lookup.findConstructor(type, MethodType.methodType(void.class, argType));
-            return Optional.of(kernelType.cast(constructor.invoke(arg)));
-        } catch (VirtualMachineError e) {
+            lookup.ensureInitialized(type);
+            return Optional.of(lookup.findConstructor(type, MethodType.methodType(void.class, argType)));
+        } catch (ReflectiveOperationException | LinkageError e) {
+            return Optional.empty(); // not usable here: the scalar code runs
+        }
+    }
+
+    /** A new kernel from a constructor given by {@link #kernelConstructor}, for {@code arg}. */
+    public static Object newKernel(MethodHandle constructor, Object arg) {
+        try {
+            return constructor.invoke(arg);
+        } catch (RuntimeException | Error e) {
             throw e;
-        } catch (Throwable e) { // a kernel that cannot be linked or built is not used; the scalar code runs
-            return Optional.empty();
+        } catch (Throwable e) {
+            throw new IllegalStateException("cannot build the SIMD kernel " + constructor, e);
         }
     }
 

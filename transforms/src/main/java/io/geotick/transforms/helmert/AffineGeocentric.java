@@ -2,6 +2,9 @@ package io.geotick.transforms.helmert;
 
 import io.geotick.geodesy.InvalidCoordinateException;
 import io.geotick.geodesy.position.EcefPosition;
+import io.geotick.geodesy.simd.Simd;
+import java.lang.invoke.MethodHandle;
+import java.lang.invoke.MethodHandles;
 import java.util.Objects;
 import org.hipparchus.linear.LUDecomposition;
 import org.hipparchus.linear.MatrixUtils;
@@ -19,6 +22,11 @@ final class AffineGeocentric implements GeocentricTransform {
     private final double t0, t1, t2;
     private final String description;
     private final GeocentricTransform inverseOf;
+    /** The SIMD kernel's constructor when {@link Simd#enabled()}, null otherwise. */
+    private static final MethodHandle VECTOR_KERNEL = Simd.kernelConstructor(MethodHandles.lookup(),
+        "io.geotick.transforms.helmert.AffineVectorKernel", AffineGeocentric.class).orElse(null);
+    /** The array kernel in vector lanes when {@link Simd#enabled()}; null otherwise. */
+    private final AffineVectorKernel vectorKernel;
 
     AffineGeocentric(double[][] d, double[] t, String description, GeocentricTransform inverseOf) {
         d00 = d[0][0];
@@ -35,6 +43,9 @@ final class AffineGeocentric implements GeocentricTransform {
         t2 = t[2];
         this.description = description;
         this.inverseOf = inverseOf;
+        // The cast only runs with the kernels on: the kernel's class needs the vector module.
+        this.vectorKernel = VECTOR_KERNEL == null ? null
+            : (AffineVectorKernel) Simd.newKernel(VECTOR_KERNEL, this);
     }
 
     double[][] smallPart() {
@@ -73,11 +84,24 @@ final class AffineGeocentric implements GeocentricTransform {
             z + Math.fma(d20, x, Math.fma(d21, y, Math.fma(d22, z, t2))));
     }
 
+    /**
+     * {@inheritDoc} With the SIMD kernels on ({@link Simd}), blocks of points are transformed in vector lanes,
+     * with the same results bit for bit.
+     */
     @Override
     public void apply(double[] in, int inOffset, double[] out, int outOffset, int count) {
         Objects.checkFromIndexSize(inOffset, 3 * count, in.length);
         Objects.checkFromIndexSize(outOffset, 3 * count, out.length);
-        for (int i = 0; i < count; i++) {
+        if (vectorKernel != null) {
+            vectorKernel.apply(in, inOffset, out, outOffset, count);
+        } else {
+            applyScalar(in, inOffset, out, outOffset, 0, count);
+        }
+    }
+
+    /** The scalar array form for points {@code from} (inclusive) to {@code to} (exclusive). */
+    void applyScalar(double[] in, int inOffset, double[] out, int outOffset, int from, int to) {
+        for (int i = from; i < to; i++) {
             int k = inOffset + 3 * i;
             double x = in[k];
             double y = in[k + 1];

@@ -123,6 +123,11 @@ public final class Helmert implements GeocentricTransform {
             + "), " + (f == RotationForm.SMALL_ANGLE ? "small-angle" : "rigorous") + " rotation matrix";
     }
 
+    /** The kernel that evaluates this transformation (for tests). */
+    AffineGeocentric kernel() {
+        return kernel;
+    }
+
     /** The parameters, in the units and convention of this transformation. */
     public HelmertParameters parameters() {
         return parameters;

@@ -124,8 +124,9 @@ class SiteAndGridStepsTest {
             .mapToObj(i -> c.convert(in[2 + 3 * i], in[3 + 3 * i], in[4 + 3 * i])).toArray(double[][]::new);
         for (int i = 0; i < n; i++) {
             double[] one = c.convert(in[2 + 3 * i], in[3 + 3 * i], in[4 + 3 * i]);
-            assertThat(Arrays.copyOfRange(out, 1 + 3 * i, 4 + 3 * i)).containsExactly(one);
-            assertThat(Arrays.copyOfRange(inPlace, 2 + 3 * i, 5 + 3 * i)).containsExactly(one);
+            // Metres: 1.3e-16° of latitude or longitude is below 2e-11 m.
+            ArrayAgreement.assertAgrees(Arrays.copyOfRange(out, 1 + 3 * i, 4 + 3 * i), one, 1e-10);
+            ArrayAgreement.assertAgrees(Arrays.copyOfRange(inPlace, 2 + 3 * i, 5 + 3 * i), one, 1e-10);
             assertThat(parallel[i]).containsExactly(one);
         }
     }
