@@ -29,7 +29,9 @@ import org.hipparchus.linear.RealMatrix;
  *
  * <p>Every conversion exists between ECEF or geodetic coordinates (on this frame's ellipsoid) and each of
  * ENU, NED and AER, for single points and as allocation-free array variants over interleaved triples
- * ({@code ecefToEnu}, {@code geodeticToAer}, …) whose results are bit-for-bit the single-point ones.
+ * ({@code ecefToEnu}, {@code geodeticToAer}, …) whose results are bit-for-bit the single-point ones (with
+ * the optional SIMD kernels on, geodetic results of the batch inverse may differ by about an ulp: see
+ * {@link io.geotick.geodesy.ecef.EcefConverter#toGeodetic(double[], int, double[], int, int)}).
  * Vectors (velocities, baselines) rotate without translation, and 3×3 covariances rotate as R C Rᵀ;
  * {@link #accuracyOf} derives the accuracy figures of an ECEF covariance in this frame. Invalid input
  * (non-finite values, results that overflow, points with no geodetic coordinates) is an
@@ -232,7 +234,8 @@ public final class LocalFrame {
     // ---------------------------------------------------------------------------------------------
     // Array (batch) variants. Every one reads count interleaved triples from in[inOffset..] and writes
     // count triples to out[outOffset..]; in and out may be the same array at the same offset (in place).
-    // Nothing is allocated per point, and each result is bit-for-bit the single-point method's. An
+    // Nothing is allocated per point, and each result is bit-for-bit the single-point method's (but see the
+    // class description for the optional SIMD kernels). An
     // invalid point throws InvalidCoordinateException naming its index; out is then unspecified.
     // ---------------------------------------------------------------------------------------------
 
