@@ -64,7 +64,7 @@ public final class EcefConverter {
     private final Ellipsoid ellipsoid;
     final double a;
     final double e2;
-    private final double oneMinusE2;
+    final double oneMinusE2;
     // Evolute semi-axes (astroid): a e² along the equator, a e²/√(1−e²) along the axis.
     final double evoluteP;
     final double evoluteZ;
@@ -78,7 +78,7 @@ public final class EcefConverter {
     /** The SIMD kernel's constructor when {@link Simd#enabled()}, null otherwise. */
     private static final MethodHandle VECTOR_KERNEL = Simd.kernelConstructor(MethodHandles.lookup(),
         "io.geotick.geodesy.ecef.EcefVectorKernel", EcefConverter.class).orElse(null);
-    /** The SIMD kernel of the array inverse, when {@link Simd#enabled()}; null otherwise. */
+    /** The SIMD kernel of the array conversions, when {@link Simd#enabled()}; null otherwise. */
     private final EcefVectorKernel vectorKernel;
 
     private EcefConverter(Ellipsoid ellipsoid) {
@@ -140,13 +140,24 @@ public final class EcefConverter {
      * Array forward conversion over interleaved triples: reads {@code count} points (φ°, λ°, h) from
      * {@code in} starting at {@code inOffset} and writes (x, y, z) to {@code out} from {@code outOffset}.
      * {@code in} and {@code out} may be the same array with the same offset (in-place). Allocates nothing.
+     * When the SIMD kernels are on ({@link Simd}), blocks of points are converted in vector lanes, with the
+     * same results bit for bit.
      *
      * @throws InvalidCoordinateException on the first invalid input, naming its index; points before it are
      *     converted, the rest are untouched
      */
     public void toEcef(double[] in, int inOffset, double[] out, int outOffset, int count) {
         checkRange(in, inOffset, out, outOffset, count);
-        for (int i = 0; i < count; i++) {
+        if (vectorKernel != null) {
+            vectorKernel.toEcef(in, inOffset, out, outOffset, count);
+        } else {
+            toEcefScalar(in, inOffset, out, outOffset, 0, count);
+        }
+    }
+
+    /** The scalar array forward of points {@code from} (inclusive) to {@code to} (exclusive). */
+    void toEcefScalar(double[] in, int inOffset, double[] out, int outOffset, int from, int to) {
+        for (int i = from; i < to; i++) {
             int k = inOffset + 3 * i;
             double lat = in[k];
             double lon = in[k + 1];

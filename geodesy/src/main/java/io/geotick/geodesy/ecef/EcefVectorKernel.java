@@ -6,21 +6,24 @@ import jdk.incubator.vector.VectorOperators;
 import jdk.incubator.vector.VectorSpecies;
 
 /**
- * The ECEF → geodetic inverse of {@link EcefConverter} on a block of {@link #LANES} points at once, one point
- * per vector lane (the JDK's incubating vector API; loaded only when {@link io.geotick.geodesy.simd.Simd}
- * says so). Immutable and thread-safe.
+ * The array conversions of {@link EcefConverter} on blocks of {@link #LANES} points at once, one point per
+ * vector lane (the JDK's incubating vector API; loaded only when {@link io.geotick.geodesy.simd.Simd} says
+ * so). Immutable and thread-safe; the scratch columns are per thread.
  *
- * <p>Per lane it evaluates the scalar method's common path, operation for operation: the double-double
- * p = √(x² + y²), Bowring's start, one Newton step on the normal condition (refined to Halley's order when
- * the step lies between 1e-9 and 1e-6 rad) and the compensated height, so the height is bit for bit the
- * scalar one. The two arc tangents use a table-free reduction suited to lanes (see
- * {@link #atan2Degrees}), within half an ulp plus 5e-18° (the scalar table method: half an ulp plus
- * 1.2e-16°), so latitude and longitude agree with the scalar results or, for 0.6 % of them, differ by
- * about an ulp (asserted in the tests, with the position bound of the reference tests).
+ * <p><b>Forward</b> (geodetic → ECEF): {@code DegreeTrig.sinCos} and the closed form, operation for
+ * operation, so the results are the scalar ones bit for bit.
  *
- * <p>A block with any point off that path (non-finite or beyond {@link EcefConverter#MAX_COORDINATE}, on the
- * polar axis or in the equatorial plane, within the evolute's bounding box, or needing a second Newton
- * step) is refused before anything is written, and the caller converts it with the scalar code, which also
+ * <p><b>Inverse</b> (ECEF → geodetic): per lane, the scalar method's common path, operation for operation:
+ * the double-double p = √(x² + y²), Bowring's start, one Newton step on the normal condition (refined to
+ * Halley's order when the step lies between 1e-9 and 1e-6 rad) and the compensated height, so the height is
+ * bit for bit the scalar one. The two arc tangents use a table-free reduction suited to lanes (see
+ * {@link #atanStage}), within half an ulp plus 5e-18° (the scalar table method: half an ulp plus 1.2e-16°),
+ * so latitude and longitude agree with the scalar results or, for 0.6 % of them, differ by about an ulp
+ * (asserted in the tests, with the position bound of the reference tests).
+ *
+ * <p>A block with any point off the common path (invalid input; for the inverse also a point on the polar
+ * axis or in the equatorial plane, within the evolute's bounding box, or needing a second Newton step) is
+ * refused before anything of it is written, and the caller converts it with the scalar code, which also
  * raises the errors.
  */
 final class EcefVectorKernel {
@@ -30,18 +33,24 @@ final class EcefVectorKernel {
 
     /** Points per chunk: the scratch columns hold one chunk (a multiple of any lane count up to 64). */
     static final int CHUNK = 256;
-    // Scratch columns, each CHUNK doubles: the chunk's coordinates, the Newton results and the outputs.
-    private static final int X = 0;
-    private static final int Y = 1;
-    private static final int Z = 2;
+    // Scratch columns, each CHUNK doubles. In: the chunk's three coordinates (x, y, z or φ, λ, h). Out: the
+    // three results (φ, λ, h or x, y, z). Between: the inverse's Newton results, the forward's sines and
+    // cosines. (This order measured a fifth faster for the inverse than putting the outputs first.)
+    private static final int IN_0 = 0;
+    private static final int IN_1 = 1;
+    private static final int IN_2 = 2;
     private static final int S_ = 3;
     private static final int C_ = 4;
     private static final int DELTA = 5;
-    private static final int H = 6;
-    private static final int LAT = 7;
-    private static final int LON = 8;
+    private static final int OUT_2 = 6;
+    private static final int OUT_0 = 7;
+    private static final int OUT_1 = 8;
     private static final int ZERO = 9;
-    private static final int COLUMNS = 10;
+    private static final int SIN_LON = 3;
+    private static final int COS_LON = 4;
+    private static final int SIN_LAT = 5;
+    private static final int COS_LAT = 10;
+    private static final int COLUMNS = 11;
     /** Per thread: the columns, and per block whether the lanes took the common path. */
     private static final ThreadLocal<Scratch> SCRATCH = ThreadLocal.withInitial(Scratch::new);
 
@@ -49,6 +58,31 @@ final class EcefVectorKernel {
         final double[] columns = new double[COLUMNS * CHUNK];
         final boolean[] blockDone = new boolean[CHUNK / LANES];
     }
+
+    /** 1.5·2⁵²: x + ROUNDER − ROUNDER is x rounded to an integer, half to even, for |x| < 2⁵¹. */
+    private static final double ROUNDER = 0x1.8p52;
+    /**
+     * π/180 as a double-double, and the Taylor coefficients of sin and cos: the values of {@code DegreeTrig},
+     * repeated here because the lanes must reproduce its results bit for bit (asserted in
+     * EcefVectorKernelTest).
+     */
+    private static final double DEG_HI = Math.PI / 180.0;
+    private static final double DEG_LO = 2.9486522708701687e-19;
+    private static final double S3 = -1.0 / 6;
+    private static final double S5 = 1.0 / 120;
+    private static final double S7 = -1.0 / 5040;
+    private static final double S9 = 1.0 / 362880;
+    private static final double S11 = -1.0 / 39916800;
+    private static final double S13 = 1.0 / 6227020800.0;
+    private static final double S15 = -1.0 / 1307674368000.0;
+    private static final double S17 = 1.0 / 355687428096000.0;
+    private static final double C4 = 1.0 / 24;
+    private static final double C6 = -1.0 / 720;
+    private static final double C8 = 1.0 / 40320;
+    private static final double C10 = -1.0 / 3628800;
+    private static final double C12 = 1.0 / 479001600;
+    private static final double C14 = -1.0 / 87178291200.0;
+    private static final double C16 = 1.0 / 20922789888000.0;
 
     /** 180/π rounded to double, and its low part. */
     private static final double RAD_HI = 180.0 / Math.PI;
@@ -104,6 +138,7 @@ final class EcefVectorKernel {
     private final double bOverA2;
     private final double e2aBOverA3;
     private final double threeE2a;
+    private final double oneMinusE2;
     private final EcefConverter scalar;
 
     /** The kernel for {@code converter}'s ellipsoid, with the converter's own constants. */
@@ -117,6 +152,7 @@ final class EcefVectorKernel {
         this.bOverA2 = converter.bOverA2;
         this.e2aBOverA3 = converter.e2aBOverA3;
         this.threeE2a = 3 * converter.e2a;
+        this.oneMinusE2 = converter.oneMinusE2;
         this.scalar = converter;
     }
 
@@ -128,6 +164,19 @@ final class EcefVectorKernel {
      * the common path, and the last points short of a block, go through the converter's scalar code.
      */
     void toGeodetic(double[] in, int inOffset, double[] out, int outOffset, int count) {
+        run(in, inOffset, out, outOffset, count, true);
+    }
+
+    /**
+     * The array forward of {@link EcefConverter#toEcef(double[], int, double[], int, int)}, same contract and
+     * bit for bit the same results: as {@link #toGeodetic}, with the stages {@link #sinCosStage} (longitude,
+     * then latitude) and {@link #forwardStage}.
+     */
+    void toEcef(double[] in, int inOffset, double[] out, int outOffset, int count) {
+        run(in, inOffset, out, outOffset, count, false);
+    }
+
+    private void run(double[] in, int inOffset, double[] out, int outOffset, int count, boolean inverse) {
         Scratch scratch = SCRATCH.get();
         double[] col = scratch.columns;
         int done = 0;
@@ -135,29 +184,45 @@ final class EcefVectorKernel {
             int m = Math.min(CHUNK, (count - done) / LANES * LANES);
             int base = inOffset + 3 * done;
             for (int i = 0; i < m; i++) {
-                col[X * CHUNK + i] = in[base + 3 * i];
-                col[Y * CHUNK + i] = in[base + 3 * i + 1];
-                col[Z * CHUNK + i] = in[base + 3 * i + 2];
+                col[IN_0 * CHUNK + i] = in[base + 3 * i];
+                col[IN_1 * CHUNK + i] = in[base + 3 * i + 1];
+                col[IN_2 * CHUNK + i] = in[base + 3 * i + 2];
             }
-            newtonStage(col, scratch.blockDone, m);
-            atanStage(col, S_ * CHUNK, col, C_ * CHUNK, col, DELTA * CHUNK, col, LAT * CHUNK, m);
-            atanStage(col, Y * CHUNK, col, X * CHUNK, col, ZERO * CHUNK, col, LON * CHUNK, m);
+            if (inverse) {
+                newtonStage(col, scratch.blockDone, m);
+                atanStage(col, S_ * CHUNK, col, C_ * CHUNK, col, DELTA * CHUNK, col, OUT_0 * CHUNK, m);
+                atanStage(col, IN_1 * CHUNK, col, IN_0 * CHUNK, col, ZERO * CHUNK, col, OUT_1 * CHUNK, m);
+                // The latitude takes the sign of z, as Math.copySign does in the scalar code.
+                for (int i = 0; i < m; i++) {
+                    col[OUT_0 * CHUNK + i] = Math.copySign(col[OUT_0 * CHUNK + i], col[IN_2 * CHUNK + i]);
+                }
+            } else {
+                sinCosStage(col, IN_1 * CHUNK, SIN_LON * CHUNK, COS_LON * CHUNK, m);
+                sinCosStage(col, IN_0 * CHUNK, SIN_LAT * CHUNK, COS_LAT * CHUNK, m);
+                forwardStage(col, scratch.blockDone, m);
+            }
             for (int b = 0; b < m; b += LANES) {
                 int first = done + b;
                 if (scratch.blockDone[b / LANES]) {
                     for (int i = b; i < b + LANES; i++) {
                         int k = outOffset + 3 * (done + i);
-                        out[k] = Math.copySign(col[LAT * CHUNK + i], col[Z * CHUNK + i]);
-                        out[k + 1] = col[LON * CHUNK + i];
-                        out[k + 2] = col[H * CHUNK + i];
+                        out[k] = col[OUT_0 * CHUNK + i];
+                        out[k + 1] = col[OUT_1 * CHUNK + i];
+                        out[k + 2] = col[OUT_2 * CHUNK + i];
                     }
-                } else {
+                } else if (inverse) {
                     scalar.toGeodeticScalar(in, inOffset, out, outOffset, first, first + LANES);
+                } else {
+                    scalar.toEcefScalar(in, inOffset, out, outOffset, first, first + LANES);
                 }
             }
             done += m;
         }
-        scalar.toGeodeticScalar(in, inOffset, out, outOffset, done, count);
+        if (inverse) {
+            scalar.toGeodeticScalar(in, inOffset, out, outOffset, done, count);
+        } else {
+            scalar.toEcefScalar(in, inOffset, out, outOffset, done, count);
+        }
     }
 
     /**
@@ -169,9 +234,9 @@ final class EcefVectorKernel {
         // One loop with the whole block inline: a vector passed to a method the JIT does not inline would
         // be boxed, which costs more than the SIMD gains.
         for (int i = 0; i < m; i += LANES) {
-            DoubleVector x = DoubleVector.fromArray(S, col, X * CHUNK + i);
-            DoubleVector y = DoubleVector.fromArray(S, col, Y * CHUNK + i);
-            DoubleVector z = DoubleVector.fromArray(S, col, Z * CHUNK + i);
+            DoubleVector x = DoubleVector.fromArray(S, col, IN_0 * CHUNK + i);
+            DoubleVector y = DoubleVector.fromArray(S, col, IN_1 * CHUNK + i);
+            DoubleVector z = DoubleVector.fromArray(S, col, IN_2 * CHUNK + i);
             DoubleVector ax = x.abs();
             DoubleVector ay = y.abs();
             DoubleVector az = z.abs();
@@ -261,7 +326,83 @@ final class EcefVectorKernel {
             s.intoArray(col, S_ * CHUNK + i);
             c.intoArray(col, C_ * CHUNK + i);
             delta.intoArray(col, DELTA * CHUNK + i);
-            h.intoArray(col, H * CHUNK + i);
+            h.intoArray(col, OUT_2 * CHUNK + i);
+            blockDone[i / LANES] = true;
+        }
+    }
+
+    /**
+     * sin and cos of the degree arguments in column {@code inAt}, per lane, into {@code sinAt} and {@code cosAt}:
+     * {@code DegreeTrig.sinCos}'s method operation for operation (exact reduction to [−45°, 45°], the
+     * double-double radian argument, Estrin's polynomials, the branch-free quadrant), so bit for bit its
+     * results. For |d| ≤ 360°, which {@link #forwardStage} checks before it uses them.
+     */
+    static void sinCosStage(double[] col, int inAt, int sinAt, int cosAt, int m) {
+        // One loop with the whole block inline (see newtonStage).
+        for (int i = 0; i < m; i += LANES) {
+            DoubleVector d = DoubleVector.fromArray(S, col, inAt + i);
+            // qd = rint(d/90): adding and subtracting 1.5·2⁵² rounds half to even, as Math.rint does.
+            DoubleVector qd = d.mul(1.0 / 90.0).add(ROUNDER).sub(ROUNDER);
+            DoubleVector r = d.sub(qd.mul(90.0));
+            DoubleVector hi = r.mul(DEG_HI);
+            DoubleVector lo = r.fma(DoubleVector.broadcast(S, DEG_HI), hi.neg()).add(r.mul(DEG_LO));
+            DoubleVector z = hi.mul(hi);
+            DoubleVector zl = hi.fma(hi, z.neg());
+            DoubleVector z2 = z.mul(z);
+            DoubleVector z4 = z2.mul(z2);
+            DoubleVector one = DoubleVector.broadcast(S, 1.0);
+            DoubleVector ps = z.fma(S17, S15).fma(z2, z.fma(S13, S11)).fma(z4, z.fma(S9, S7).fma(z2, z.fma(S5, S3)));
+            DoubleVector sin = hi.add(hi.mul(z.mul(ps).add(zl.mul(S3))).add(lo.mul(one.sub(z.mul(0.5)))));
+            DoubleVector pc = z2.fma(DoubleVector.broadcast(S, C16), z.fma(C14, C12))
+                .fma(z4, z.fma(C10, C8).fma(z2, z.fma(C6, C4)));
+            DoubleVector hz = z.mul(0.5);
+            DoubleVector w = one.sub(hz);
+            DoubleVector cos = w.add(one.sub(w).sub(hz).sub(zl.mul(0.5)).add(z2.mul(pc).sub(lo.mul(hi))));
+            // The quadrant m = qd mod 4 (qd in −4..4): m odd swaps sine and cosine; the sine is negative for
+            // m in {2, 3}, the cosine for m in {1, 2}. Products with 0 and ±1 as in the scalar code.
+            VectorMask<Double> q1 = qd.compare(VectorOperators.EQ, 1.0);
+            VectorMask<Double> q2 = qd.compare(VectorOperators.EQ, 2.0);
+            VectorMask<Double> q3 = qd.compare(VectorOperators.EQ, 3.0);
+            VectorMask<Double> qm1 = qd.compare(VectorOperators.EQ, -1.0);
+            VectorMask<Double> qm2 = qd.compare(VectorOperators.EQ, -2.0);
+            VectorMask<Double> qm3 = qd.compare(VectorOperators.EQ, -3.0);
+            DoubleVector swap = DoubleVector.zero(S).blend(1.0, q1.or(q3).or(qm1).or(qm3));
+            DoubleVector keep = one.sub(swap);
+            DoubleVector sinSign = one.blend(-1.0, q2.or(q3).or(qm1).or(qm2));
+            DoubleVector cosSign = one.blend(-1.0, q1.or(q2).or(qm2).or(qm3));
+            sinSign.mul(sin.mul(keep).add(cos.mul(swap))).intoArray(col, sinAt + i);
+            cosSign.mul(cos.mul(keep).add(sin.mul(swap))).add(0.0).intoArray(col, cosAt + i);
+        }
+    }
+
+    /**
+     * Geodetic → ECEF for the first {@code m} points of the columns, from the sines and cosines:
+     * ν = a/√(1 − e² sin²φ), x = (ν + h) cos φ cos λ, y = (ν + h) cos φ sin λ, z = ((1 − e²)ν + h) sin φ, as
+     * the scalar code evaluates them; per block, whether every lane holds a valid position
+     * (φ in [−90°, 90°], λ in [−360°, 360°], h finite).
+     */
+    private void forwardStage(double[] col, boolean[] blockDone, int m) {
+        for (int i = 0; i < m; i += LANES) {
+            DoubleVector lat = DoubleVector.fromArray(S, col, IN_0 * CHUNK + i);
+            DoubleVector lon = DoubleVector.fromArray(S, col, IN_1 * CHUNK + i);
+            DoubleVector h = DoubleVector.fromArray(S, col, IN_2 * CHUNK + i);
+            VectorMask<Double> valid = lat.compare(VectorOperators.GE, -90.0).and(lat.compare(VectorOperators.LE, 90.0))
+                .and(lon.compare(VectorOperators.GE, -360.0)).and(lon.compare(VectorOperators.LE, 360.0))
+                .and(h.abs().compare(VectorOperators.LE, Double.MAX_VALUE));
+            if (!valid.allTrue()) {
+                blockDone[i / LANES] = false;
+                continue;
+            }
+            DoubleVector sp = DoubleVector.fromArray(S, col, SIN_LAT * CHUNK + i);
+            DoubleVector cp = DoubleVector.fromArray(S, col, COS_LAT * CHUNK + i);
+            DoubleVector sl = DoubleVector.fromArray(S, col, SIN_LON * CHUNK + i);
+            DoubleVector cl = DoubleVector.fromArray(S, col, COS_LON * CHUNK + i);
+            DoubleVector nu = DoubleVector.broadcast(S, a)
+                .div(DoubleVector.broadcast(S, 1.0).sub(sp.mul(e2).mul(sp)).sqrt());
+            DoubleVector r = nu.add(h).mul(cp);
+            r.mul(cl).intoArray(col, OUT_0 * CHUNK + i);
+            r.mul(sl).intoArray(col, OUT_1 * CHUNK + i);
+            nu.mul(oneMinusE2).add(h).mul(sp).intoArray(col, OUT_2 * CHUNK + i);
             blockDone[i / LANES] = true;
         }
     }
@@ -346,7 +487,8 @@ final class EcefVectorKernel {
             DoubleVector poly = p46.fma(u2.mul(u2), p03);
             // (th + tl + th³P)·180/π = mh + ml.
             DoubleVector mh = th.mul(RAD_HI);
-            DoubleVector ml = th.fma(DoubleVector.broadcast(S, RAD_HI), mh.neg()).add(th.mul(RAD_LO).add(th.mul(u).fma(poly, tl).mul(RAD_HI)));
+            DoubleVector ml = th.fma(DoubleVector.broadcast(S, RAD_HI), mh.neg())
+                .add(th.mul(RAD_LO).add(th.mul(u).fma(poly, tl).mul(RAD_HI)));
             // offset + sign·(ah + mh) with exact error terms (|offset| ≥ |ah| or offset = 0; |offset + sign·ah|
             // ≥ |mh| or both are 0).
             DoubleVector sah = sign.mul(ah);

@@ -143,6 +143,59 @@ class EcefVectorKernelTest {
         }
     }
 
+    /** Random geodetic points, with the exact quadrant boundaries and signed zeros mixed in. */
+    private static double[] randomGeodetic(int n, long seed) {
+        Random r = new Random(seed);
+        double[] edgeLat = {90, -90, 0.0, -0.0, 45, -45, 89.99999999, Math.nextDown(90.0), 1e-300};
+        double[] edgeLon = {180, -180, 360, -360, 0.0, -0.0, 90, -90, 270, -270, 135, 315, -225, Math.nextUp(-360.0)};
+        double[] g = new double[3 * n];
+        for (int i = 0; i < n; i++) {
+            g[3 * i] = i % 5 == 0 ? edgeLat[r.nextInt(edgeLat.length)]
+                : Math.toDegrees(Math.asin(2 * r.nextDouble() - 1));
+            g[3 * i + 1] = i % 3 == 0 ? edgeLon[r.nextInt(edgeLon.length)] : 720 * r.nextDouble() - 360;
+            g[3 * i + 2] = i % 2 == 0 ? -5e6 + 5.5e7 * r.nextDouble() : -1e4 + 1e5 * r.nextDouble();
+        }
+        return g;
+    }
+
+    private static long[] bits(double[] a) {
+        return Arrays.stream(a).mapToLong(Double::doubleToRawLongBits).toArray();
+    }
+
+    @Test
+    void theForwardArraysMatchTheScalarCodeBitForBit() {
+        assumeTrue(Simd.enabled(), Simd.status());
+        for (int n : new int[] {1, 7, 8, 9, 300, 10_001}) {
+            double[] g = randomGeodetic(n, n);
+            double[] expected = new double[3 * n];
+            C.toEcefScalar(g, 0, expected, 0, 0, n);
+            double[] got = new double[3 * n + 3];
+            C.toEcef(g, 0, got, 3, n);
+            assertThat(bits(Arrays.copyOfRange(got, 3, 3 * n + 3))).as("n %s", n).isEqualTo(bits(expected));
+            double[] inPlace = g.clone();
+            C.toEcef(inPlace, 0, inPlace, 0, n);
+            assertThat(bits(inPlace)).as("in place, n %s", n).isEqualTo(bits(expected));
+        }
+    }
+
+    @Test
+    void anInvalidForwardPointIsReportedByIndexAndThePointsBeforeItAreConverted() {
+        assumeTrue(Simd.enabled(), Simd.status());
+        int n = 1_000;
+        for (double[] bad : new double[][] {{91, 0, 0}, {10, 400, 0}, {10, 20, Double.NaN}, {Double.NaN, 0, 0}}) {
+            double[] g = randomGeodetic(n, 76);
+            System.arraycopy(bad, 0, g, 3 * 611, 3);
+            double[] expected = new double[3 * 611];
+            C.toEcefScalar(g, 0, expected, 0, 0, 611);
+            double[] out = new double[3 * n];
+            Arrays.fill(out, -1);
+            assertThatThrownBy(() -> C.toEcef(g, 0, out, 0, n)).isInstanceOf(InvalidCoordinateException.class)
+                .hasMessageStartingWith("point 611: ");
+            assertThat(bits(Arrays.copyOf(out, 3 * 611))).isEqualTo(bits(expected));
+            assertThat(Arrays.copyOfRange(out, 3 * 611, 3 * n)).containsOnly(-1.0);
+        }
+    }
+
     private static final DfpField F = new DfpField(30);
     private static final Dfp PER_RAD = F.newDfp(180).divide(F.getPi());
 
