@@ -10,6 +10,7 @@ import org.locationtech.proj4j.datum.Ellipsoid;
 import org.locationtech.proj4j.datum.GeocentricConverter;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Fork;
 import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OperationsPerInvocation;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
@@ -28,8 +29,13 @@ import org.openjdk.jmh.infra.Blackhole;
  * its conversion from degrees is not timed. {@code point_*} converts one point per operation (geotick's
  * value API, allocating the result; Proj4J on one reused {@link ProjCoordinate}); {@code array_*} converts
  * all {@value EcefPoints#COUNT} points per operation into an output array.
+ *
+ * <p>The forks start with {@code --add-modules jdk.incubator.vector}, so that the array variant runs its
+ * SIMD kernel ({@link io.geotick.geodesy.simd.Simd}); {@code arrayScalar_geotick} turns it off
+ * ({@code -Dgeotick.simd=off}) and is paired with {@code array_proj4j}.
  */
 @State(Scope.Thread)
+@Fork(jvmArgsAppend = "--add-modules=jdk.incubator.vector")
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.NANOSECONDS)
 public class GeodeticToEcefBenchmark {
@@ -82,6 +88,14 @@ public class GeodeticToEcefBenchmark {
     @Benchmark
     @OperationsPerInvocation(EcefPoints.COUNT)
     public double[] array_geotick() {
+        geotick.toEcef(degrees, 0, out, 0, EcefPoints.COUNT);
+        return out;
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(EcefPoints.COUNT)
+    @Fork(jvmArgsAppend = {"--add-modules=jdk.incubator.vector", "-Dgeotick.simd=off"})
+    public double[] arrayScalar_geotick() {
         geotick.toEcef(degrees, 0, out, 0, EcefPoints.COUNT);
         return out;
     }
