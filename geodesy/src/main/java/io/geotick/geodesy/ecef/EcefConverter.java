@@ -103,7 +103,7 @@ public final class EcefConverter {
         return new EcefConverter(Objects.requireNonNull(ellipsoid, "ellipsoid"));
     }
 
-    /** Whether the array inverse uses the SIMD kernel (for tests). */
+    /** Whether the array conversions use the SIMD kernel (for tests). */
     boolean vectorised() {
         return vectorKernel != null;
     }
