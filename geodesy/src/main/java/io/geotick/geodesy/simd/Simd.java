@@ -18,8 +18,10 @@ public final class Simd {
     public static final String PROPERTY = "geotick.simd";
     private static final String MODULE = "jdk.incubator.vector";
     private static final boolean MODULE_PRESENT = ModuleLayer.boot().findModule(MODULE).isPresent();
-    private static final boolean ENABLED = MODULE_PRESENT && !"off".equalsIgnoreCase(System.getProperty(PROPERTY))
-        && lanesOrZero() >= 4;
+    private static final boolean SWITCHED_OFF = "off".equalsIgnoreCase(System.getProperty(PROPERTY));
+    /** Doubles per preferred vector, 0 without the module; read once. */
+    private static final int LANES = lanesOrZero();
+    private static final boolean ENABLED = MODULE_PRESENT && !SWITCHED_OFF && LANES >= 4;
 
     private Simd() {
     }
@@ -32,12 +34,12 @@ public final class Simd {
     /** A one-line description of the state, for logs and {@code --version}. */
     public static String status() {
         if (ENABLED) {
-            return "SIMD kernels on (" + MODULE + ", " + lanesOrZero() + " doubles per vector)";
+            return "SIMD kernels on (" + MODULE + ", " + LANES + " doubles per vector)";
         }
         if (!MODULE_PRESENT) {
             return "SIMD kernels off (start Java with --add-modules " + MODULE + " to use them)";
         }
-        if ("off".equalsIgnoreCase(System.getProperty(PROPERTY))) {
+        if (SWITCHED_OFF) {
             return "SIMD kernels off (-D" + PROPERTY + "=off)";
         }
         return "SIMD kernels off (vectors of fewer than 4 doubles on this platform)";
