@@ -56,6 +56,8 @@ public final class StandardFrames {
 
     private static final String IGN = "IERS ITRS Centre (IGN), transformation parameters from ITRF2020 to past"
         + " ITRFs, position-vector convention, t0 = 2015.0 (values from memory)";
+    /** EPSG records transformations between these frames (from memory); their codes were not at hand to check. */
+    private static final String NO_EPSG_CODE = "EPSG transformation code not recorded here: not verified";
     private static final Epoch T2015 = Epoch.of(2015.0);
 
     static final FrameRegistry REGISTRY = build();
@@ -67,7 +69,7 @@ public final class StandardFrames {
         return FrameLink.timeDependent(ITRF2020, to, TimeDependentHelmert.of(
             HelmertParameters.ofMillimetres(p[0], p[1], p[2], 0, 0, 0, p[3]),
             HelmertParameters.ofMillimetres(r[0], r[1], r[2], 0, 0, 0, r[3]), T2015,
-            RotationConvention.POSITION_VECTOR), 0, IGN + "; table row " + to.name(), accuracy);
+            RotationConvention.POSITION_VECTOR), 0, IGN + "; table row " + to.name() + "; " + NO_EPSG_CODE, accuracy);
     }
 
     private static FrameRegistry build() {
@@ -86,7 +88,8 @@ public final class StandardFrames {
             HelmertParameters.ofMillimetres(54.7, 52.2, -74.1, 1.701, 10.290, -16.632, 2.12),
             HelmertParameters.ofMillimetres(0.1, 0.1, -1.9, 0.081, 0.490, -0.792, 0.11), Epoch.of(2010.0),
             RotationConvention.POSITION_VECTOR), 0,
-            "EUREF Technical Note 1 (Altamimi), ITRF2014 → ETRF2000, t0 = 2010.0 (values from memory)", 0.01,
+            "EUREF Technical Note 1 (Altamimi), ITRF2014 → ETRF2000, t0 = 2010.0 (values from memory); "
+                + NO_EPSG_CODE, 0.01,
             "ETRF2000 is tied to the Eurasian plate; outside its stable part (e.g. across plate boundaries)"
                 + " coordinates drift by cm/yr relative to it"));
         String align = "WGS 84 realisations and their ITRF alignment as published by NGA (dates from memory)";
