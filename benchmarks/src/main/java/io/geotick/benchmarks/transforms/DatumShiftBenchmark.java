@@ -60,7 +60,8 @@ import org.openjdk.jmh.annotations.Warmup;
 @Fork(value = 1, jvmArgsAppend = "--add-modules=jdk.incubator.vector")
 public class DatumShiftBenchmark {
     static final int N = 1000;
-    private static final double[] OSGB = {446.448, -125.157, 542.06, 0.15, 0.247, 0.842, -20.489};
+    /** EPSG transformation 1314, OSGB 1936 → WGS 84, position vector (from memory). */
+    static final double[] OSGB = {446.448, -125.157, 542.06, 0.15, 0.247, 0.842, -20.489};
     private static final double ARCSEC = Math.PI / (180 * 3600);
 
     private final double[] ecef = new double[3 * N];
@@ -152,17 +153,24 @@ public class DatumShiftBenchmark {
     @Benchmark
     @OperationsPerInvocation(N)
     public double[] helmert_proj4j() {
-        ProjCoordinate c = projC;
-        for (int i = 0; i < N; i++) {
-            c.x = ecef[3 * i];
-            c.y = ecef[3 * i + 1];
-            c.z = ecef[3 * i + 2];
-            projDatum.transformFromGeocentricToWgs84(c);
-            out[3 * i] = c.x;
-            out[3 * i + 1] = c.y;
-            out[3 * i + 2] = c.z;
-        }
+        proj4jShift(projDatum, projC, ecef, 0, out, 0, N);
         return out;
+    }
+
+    /** Proj4J's geocentric shift of {@code datum} over n interleaved points, as our array call does it. */
+    static void proj4jShift(Datum datum, ProjCoordinate c, double[] in, int inOffset, double[] out, int outOffset,
+            int n) {
+        for (int i = 0; i < n; i++) {
+            int k = inOffset + 3 * i;
+            c.x = in[k];
+            c.y = in[k + 1];
+            c.z = in[k + 2];
+            datum.transformFromGeocentricToWgs84(c);
+            int o = outOffset + 3 * i;
+            out[o] = c.x;
+            out[o + 1] = c.y;
+            out[o + 2] = c.z;
+        }
     }
 
     /** Our chain geodetic@OSGB 1936 → geodetic@WGS 84 (geodetic → ECEF → Helmert → geodetic), arrays. */
