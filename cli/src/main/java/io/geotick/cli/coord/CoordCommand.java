@@ -44,8 +44,8 @@ import picocli.CommandLine.Spec;
         "       geotick coord --from SYS --to SYS [same options] --input FILE|-",
         "      [--output FILE] [--json]"},
     description = {
-        "Convert one point, or every row of a CSV file (--input), between coordinate",
-        "systems and reference frames.",
+        "Convert one point, or every row of a CSV file (--input), between coordinate systems and "
+            + "reference frames.",
         "",
         "Systems (SYS) and their values V1 V2 V3, typed and printed in this order:",
         "  geodetic        latitude (deg, north positive), longitude (deg, east",
@@ -78,8 +78,9 @@ import picocli.CommandLine.Spec;
         "then not printed). Grid targets also print the zone (UTM/UPS), the point",
         "scale factor and the meridian convergence (deg, true to grid north, clockwise).",
         "",
-        "Frames (SYS@FRAME): append @FRAME to a system, e.g. ecef@ITRF2020, geodetic@ETRF2000,",
-        "geodetic@OSGB36, enu:52,-1,80@OSGB36 (the origin is then in that frame).",
+        "Frames (SYS@FRAME): append @FRAME to a system, e.g. ecef@ITRF2020,",
+        "geodetic@ETRF2000, geodetic@OSGB36, enu:52,-1,80@OSGB36 (the origin is then in",
+        "that frame).",
         "'geotick frames' lists the frames and the published parameter sets between",
         "them. Give a frame at both ends or at neither:",
         "  * neither: a purely geometric conversion on --ellipsoid (default WGS 84);",

@@ -38,8 +38,8 @@ import picocli.CommandLine.Spec;
         "      [--week-bits BITS] [--near DATE] [--leap-file PATH]",
         "      [--smear-start DURATION] [--smear-length DURATION] [--] VALUE",
         "       geotick time [same options] --input FILE|- [--output FILE]"},
-    description = {"Convert one timestamp exactly to every time scale and encoding, or every",
-        "value of a CSV file (--input).",
+    description = {"Convert one timestamp exactly to every time scale and encoding, or every value of a CSV "
+            + "file (--input).",
         "",
         "VALUE is one of:",
         "  ISO 8601 text: Z or an offset means UTC, otherwise a label on --in;",
