@@ -1,5 +1,6 @@
 package io.geotick.cli;
 
+import io.geotick.transforms.FileFailure;
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.MappingIterator;
@@ -154,7 +155,7 @@ public final class CsvBatch {
             }
         } catch (IOException e) {
             throw new UncheckedIOException((opened[0] == null ? "cannot read " + inName : "cannot write " + outName)
-                + ": " + reason(e), e);
+                + ": " + FileFailure.reason(e), e);
         }
         if (toStdout && out.checkError()) {
             throw new UncheckedIOException("cannot write standard output", new IOException("write failed"));
@@ -210,7 +211,7 @@ public final class CsvBatch {
             try {
                 out = sink.open();
             } catch (IOException e) {
-                throw new UncheckedIOException("cannot write " + outName + ": " + reason(e), e);
+                throw new UncheckedIOException("cannot write " + outName + ": " + FileFailure.reason(e), e);
             }
             long rows = 0;
             long failed = 0;
@@ -233,11 +234,11 @@ public final class CsvBatch {
                 }
                 out.flush();
             } catch (IOException e) {
-                throw new UncheckedIOException("cannot write " + outName + ": " + reason(e), e);
+                throw new UncheckedIOException("cannot write " + outName + ": " + FileFailure.reason(e), e);
             }
             return new Summary(rows, failed);
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot read " + name + ": " + reason(e), e);
+            throw new UncheckedIOException("cannot read " + name + ": " + FileFailure.reason(e), e);
         }
     }
 
@@ -306,20 +307,6 @@ public final class CsvBatch {
         } else {
             row.add(v);
         }
-    }
-
-    /** An I/O failure in words: the file-system exceptions carry only the path as their message. */
-    public static String reason(IOException e) {
-        if (e instanceof java.nio.file.NoSuchFileException) {
-            return "no such file or directory";
-        }
-        if (e instanceof java.nio.file.AccessDeniedException) {
-            return "permission denied";
-        }
-        if (e instanceof java.nio.file.FileSystemException f && f.getReason() != null) {
-            return f.getReason();
-        }
-        return e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
     }
 
     private static boolean sameFile(Path a, Path b) {

@@ -1,5 +1,6 @@
 package io.geotick.cli.fit;
 
+import io.geotick.transforms.FileFailure;
 import com.fasterxml.jackson.databind.MappingIterator;
 import com.fasterxml.jackson.dataformat.csv.CsvMapper;
 import com.fasterxml.jackson.dataformat.csv.CsvParser;
@@ -75,7 +76,7 @@ final class PairsCsv {
                     : ControlPoint.of(row[0].strip(), v[0], v[1], v[2], v[3], v[4], v[5]));
             }
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot read " + file + ": " + e.getMessage(), e);
+            throw new UncheckedIOException("cannot read " + file + ": " + FileFailure.reason(e), e);
         }
         if (header == null) {
             throw new UserInputException(file + " is empty: it needs a header row and the control points");

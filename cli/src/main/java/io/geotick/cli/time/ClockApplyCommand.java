@@ -1,5 +1,6 @@
 package io.geotick.cli.time;
 
+import io.geotick.transforms.FileFailure;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.fasterxml.jackson.databind.util.RawValue;
@@ -74,7 +75,7 @@ public final class ClockApplyCommand implements Callable<Integer> {
                     }
                 }
             } catch (IOException e) {
-                throw new UncheckedIOException("cannot read " + input + ": " + e.getMessage(), e);
+                throw new UncheckedIOException("cannot read " + input + ": " + FileFailure.reason(e), e);
             }
         }
         if (items.isEmpty()) {

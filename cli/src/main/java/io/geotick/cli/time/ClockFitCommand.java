@@ -1,5 +1,6 @@
 package io.geotick.cli.time;
 
+import io.geotick.transforms.FileFailure;
 import com.fasterxml.jackson.databind.MappingIterator;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.fasterxml.jackson.dataformat.csv.CsvMapper;
@@ -97,7 +98,7 @@ public final class ClockFitCommand implements Runnable {
                 Files.writeString(output, Json.MAPPER.writerWithDefaultPrettyPrinter().writeValueAsString(model)
                     + System.lineSeparator());
             } catch (IOException e) {
-                throw new UncheckedIOException("cannot write clock model " + output + ": " + e.getMessage(), e);
+                throw new UncheckedIOException("cannot write clock model " + output + ": " + FileFailure.reason(e), e);
             }
         }
         PrintWriter out = spec.commandLine().getOut();
@@ -179,7 +180,7 @@ public final class ClockFitCommand implements Runnable {
         } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
             throw new UserInputException(file + ": not a readable CSV file: " + e.getOriginalMessage(), e);
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot read " + file + ": " + e.getMessage(), e);
+            throw new UncheckedIOException("cannot read " + file + ": " + FileFailure.reason(e), e);
         } catch (RuntimeException e) {
             if (e.getCause() instanceof com.fasterxml.jackson.core.JsonProcessingException j) {
                 throw new UserInputException(file + ": not a readable CSV file: " + j.getOriginalMessage(), e);

@@ -1,5 +1,6 @@
 package io.geotick.cli.time;
 
+import io.geotick.transforms.FileFailure;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -115,7 +116,7 @@ final class ClockModelFile {
             throw new DataFileException("clock model " + file + " is not valid JSON: "
                 + e.getOriginalMessage(), e);
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot read clock model " + file + ": " + e.getMessage(), e);
+            throw new UncheckedIOException("cannot read clock model " + file + ": " + FileFailure.reason(e), e);
         }
         try {
             if (!FORMAT.equals(text(n, "format"))) {

@@ -1,5 +1,6 @@
 package io.geotick.cli.time;
 
+import io.geotick.transforms.FileFailure;
 import io.geotick.timescales.TimeConverter;
 import io.geotick.timescales.leap.LeapTable;
 import io.geotick.timescales.leap.LeapTables;
@@ -39,10 +40,8 @@ public final class LeapOptions {
     static LeapTable load(Path file) {
         try {
             return LeapTable.load(file);
-        } catch (java.nio.file.NoSuchFileException e) {
-            throw new UncheckedIOException("cannot read leap-second list " + file + ": no such file", e);
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot read leap-second list " + file + ": " + e.getMessage(), e);
+            throw new UncheckedIOException("cannot read leap-second list " + file + ": " + FileFailure.reason(e), e);
         }
     }
 

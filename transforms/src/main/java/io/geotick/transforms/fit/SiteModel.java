@@ -1,5 +1,6 @@
 package io.geotick.transforms.fit;
 
+import io.geotick.transforms.FileFailure;
 import io.geotick.transforms.helmert.Helmert;
 import io.geotick.transforms.helmert.HelmertParameters;
 import io.geotick.transforms.helmert.RotationConvention;
@@ -349,7 +350,7 @@ public final class SiteModel implements SiteTransform {
         try {
             Files.writeString(file, toJson());
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot write site model " + file + ": " + e.getMessage(), e);
+            throw new UncheckedIOException("cannot write site model " + file + ": " + FileFailure.reason(e), e);
         }
     }
 
@@ -373,7 +374,7 @@ public final class SiteModel implements SiteTransform {
         try {
             text = Files.readString(file);
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot read site model " + file + ": " + e.getMessage(), e);
+            throw new UncheckedIOException("cannot read site model " + file + ": " + FileFailure.reason(e), e);
         }
         return SiteModelJson.read(text, "site model " + file);
     }

@@ -1,5 +1,6 @@
 package io.geotick.transforms.grid;
 
+import io.geotick.transforms.FileFailure;
 import io.geotick.geodesy.InvalidCoordinateException;
 import io.geotick.geodesy.position.GeodeticPosition;
 import java.io.IOException;
@@ -74,7 +75,7 @@ public final class Ntv2Grid {
         try {
             return parse(Files.readAllBytes(file), file.toString());
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot read NTv2 file " + file + ": " + e.getMessage(), e);
+            throw new UncheckedIOException("cannot read NTv2 file " + file + ": " + FileFailure.reason(e), e);
         }
     }
 

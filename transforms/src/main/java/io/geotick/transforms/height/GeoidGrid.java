@@ -1,5 +1,6 @@
 package io.geotick.transforms.height;
 
+import io.geotick.transforms.FileFailure;
 import io.geotick.geodesy.InvalidCoordinateException;
 import io.geotick.transforms.grid.GridFormatException;
 import io.geotick.transforms.grid.OutsideGridException;
@@ -75,7 +76,7 @@ public final class GeoidGrid {
         try (BufferedReader r = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
             return parse(r, file.toString());
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot read ISG file " + file + ": " + e.getMessage(), e);
+            throw new UncheckedIOException("cannot read ISG file " + file + ": " + FileFailure.reason(e), e);
         }
     }
 

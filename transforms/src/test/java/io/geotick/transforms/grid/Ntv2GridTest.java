@@ -7,9 +7,12 @@ import static org.assertj.core.api.Assertions.within;
 import io.geotick.transforms.chain.ConversionChain;
 import io.geotick.transforms.chain.CoordinateSystem;
 import io.geotick.transforms.frames.StandardFrames;
+import java.io.UncheckedIOException;
 import java.nio.ByteOrder;
+import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 class Ntv2GridTest {
     /** One 2 × 2 subgrid, 40°..41°N, 0°..1°W, constant shifts 1″ north and 2″ west. */
@@ -38,6 +41,13 @@ class Ntv2GridTest {
         assertThat(q[0]).isCloseTo(40.5, within(1e-12));
         assertThat(q[1]).isCloseTo(-0.5, within(1e-12));
         assertThatThrownBy(() -> c.convert(39.9, -0.5, 0)).isInstanceOf(OutsideGridException.class);
+    }
+
+    @Test
+    void aMissingFileIsNamedWithTheReason(@TempDir Path dir) {
+        Path absent = dir.resolve("absent.gsb");
+        assertThatThrownBy(() -> Ntv2Grid.read(absent)).isInstanceOf(UncheckedIOException.class)
+            .hasMessage("cannot read NTv2 file " + absent + ": no such file or directory");
     }
 
     @Test
