@@ -1,6 +1,5 @@
 package io.geotick.cli;
 
-import io.geotick.transforms.FileFailure;
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.MappingIterator;
@@ -13,6 +12,7 @@ import com.fasterxml.jackson.databind.util.RawValue;
 import com.fasterxml.jackson.dataformat.csv.CsvMapper;
 import com.fasterxml.jackson.dataformat.csv.CsvParser;
 import com.fasterxml.jackson.dataformat.csv.CsvSchema;
+import io.geotick.transforms.FileFailure;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStreamReader;

@@ -1,11 +1,11 @@
 package io.geotick.cli.fit;
 
-import io.geotick.transforms.FileFailure;
 import com.fasterxml.jackson.databind.MappingIterator;
 import com.fasterxml.jackson.dataformat.csv.CsvMapper;
 import com.fasterxml.jackson.dataformat.csv.CsvParser;
 import com.fasterxml.jackson.dataformat.csv.CsvSchema;
 import io.geotick.cli.UserInputException;
+import io.geotick.transforms.FileFailure;
 import io.geotick.transforms.fit.ControlPoint;
 import java.io.IOException;
 import java.io.UncheckedIOException;

@@ -1,6 +1,5 @@
 package io.geotick.cli.time;
 
-import io.geotick.transforms.FileFailure;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.fasterxml.jackson.databind.util.RawValue;
@@ -13,6 +12,7 @@ import io.geotick.timescales.TimeConverter;
 import io.geotick.timescales.clock.ClockModel;
 import io.geotick.timescales.encoding.DecimalSeconds;
 import io.geotick.timescales.leap.LeapTables;
+import io.geotick.transforms.FileFailure;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;

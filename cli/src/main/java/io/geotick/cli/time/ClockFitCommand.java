@@ -1,6 +1,5 @@
 package io.geotick.cli.time;
 
-import io.geotick.transforms.FileFailure;
 import com.fasterxml.jackson.databind.MappingIterator;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.fasterxml.jackson.dataformat.csv.CsvMapper;
@@ -16,6 +15,7 @@ import io.geotick.timescales.clock.ClockModel;
 import io.geotick.timescales.clock.ClockPair;
 import io.geotick.timescales.clock.ClockTerms;
 import io.geotick.timescales.leap.LeapTables;
+import io.geotick.transforms.FileFailure;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.Reader;

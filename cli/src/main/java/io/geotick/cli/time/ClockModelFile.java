@@ -1,6 +1,5 @@
 package io.geotick.cli.time;
 
-import io.geotick.transforms.FileFailure;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -13,6 +12,7 @@ import io.geotick.timescales.clock.ClockFit;
 import io.geotick.timescales.clock.ClockModel;
 import io.geotick.timescales.clock.ClockTerms;
 import io.geotick.timescales.encoding.DecimalSeconds;
+import io.geotick.transforms.FileFailure;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;

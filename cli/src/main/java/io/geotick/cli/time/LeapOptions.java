@@ -1,10 +1,10 @@
 package io.geotick.cli.time;
 
-import io.geotick.transforms.FileFailure;
 import io.geotick.timescales.TimeConverter;
 import io.geotick.timescales.leap.LeapTable;
 import io.geotick.timescales.leap.LeapTables;
 import io.geotick.timescales.utc.SmearWindow;
+import io.geotick.transforms.FileFailure;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;

@@ -1,8 +1,8 @@
 package io.geotick.transforms.grid;
 
-import io.geotick.transforms.FileFailure;
 import io.geotick.geodesy.InvalidCoordinateException;
 import io.geotick.geodesy.position.GeodeticPosition;
+import io.geotick.transforms.FileFailure;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.ByteBuffer;

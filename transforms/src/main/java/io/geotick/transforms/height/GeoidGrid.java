@@ -1,7 +1,7 @@
 package io.geotick.transforms.height;
 
-import io.geotick.transforms.FileFailure;
 import io.geotick.geodesy.InvalidCoordinateException;
+import io.geotick.transforms.FileFailure;
 import io.geotick.transforms.grid.GridFormatException;
 import io.geotick.transforms.grid.OutsideGridException;
 import java.io.BufferedReader;
